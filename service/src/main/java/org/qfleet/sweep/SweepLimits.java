@@ -1,0 +1,19 @@
+package org.qfleet.sweep;
+
+/**
+ * Bounds that protect the service from inputs too small to fit or too large to hold.
+ *
+ * @param minPoints fewest points a sweep may have
+ * @param maxPoints most points a sweep may have, counted after decoding
+ */
+public record SweepLimits(int minPoints, int maxPoints) {
+
+    /** Seven points is the least that can constrain a circle with delay; 100 001 is far above any analyzer's sweep. */
+    public static final SweepLimits DEFAULT = new SweepLimits(7, 100_001);
+
+    public SweepLimits {
+        if (minPoints < 1 || maxPoints < minPoints) {
+            throw new IllegalArgumentException("need 1 <= minPoints <= maxPoints");
+        }
+    }
+}
