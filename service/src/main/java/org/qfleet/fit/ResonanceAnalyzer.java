@@ -1,14 +1,177 @@
 package org.qfleet.fit;
 
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import org.qfleet.sweep.SParameter;
 import org.qfleet.sweep.Sweep;
+import org.qfleet.sweep.Topology;
+import org.qfleet.sweep.Trace;
 
 /**
- * The engine's front door: one validated sweep in, one result out. Chooses the estimator (complex
- * circle when phase is present, Lorentzian otherwise) and the coupling correction.
+ * The engine's front door: one validated sweep in, one result out. Fits the main trace (S21, or S11
+ * for a reflection) with the complex circle when it has phase and the Lorentzian otherwise; for a
+ * transmission that also carries S11 and S22 with phase, fits those circles too and corrects with
+ * both couplings. Stateless and thread-safe.
  */
 public final class ResonanceAnalyzer {
 
+    private final ComplexCircleEstimator circle = new ComplexCircleEstimator();
+    private final LorentzianEstimator lorentzian = new LorentzianEstimator();
+    private final HalfPowerEstimator halfPower = new HalfPowerEstimator();
+
     public ResonanceResult analyze(Sweep sweep) throws FitException {
-        throw new FitException("not implemented yet");
+        return analyze(sweep, FitOptions.AUTOMATIC);
+    }
+
+    public ResonanceResult analyze(Sweep sweep, FitOptions options) throws FitException {
+        Topology topology = sweep.topology() != null ? sweep.topology()
+                : sweep.has(SParameter.S21) ? Topology.TRANSMISSION : Topology.REFLECTION;
+        SParameter mainParameter = topology == Topology.REFLECTION ? SParameter.S11 : SParameter.S21;
+        Trace main = sweep.trace(mainParameter).orElseThrow(() -> new FitException(
+                "a " + topology.wireName() + " sweep needs " + mainParameter.wireName() + ", which this one lacks"));
+        double[] f = sweep.frequencyHz();
+        TraceFit mainFit = fitTrace(f, main, topology, options.method());
+
+        List<TraceFit> fits = new ArrayList<>(List.of(mainFit));
+        CouplingRoute route = switch (topology) {
+            case TRANSMISSION -> CouplingRoute.TRANSMISSION_SYMMETRIC;
+            case NOTCH -> CouplingRoute.NOTCH;
+            case REFLECTION -> CouplingRoute.REFLECTION;
+        };
+        if (topology == Topology.TRANSMISSION && options.method() != Method.HALF_POWER) {
+            Optional<List<TraceFit>> ports = fitPorts(sweep);
+            if (ports.isPresent()) {
+                fits.addAll(ports.get());
+                route = CouplingRoute.TRANSMISSION_PORTS;
+            }
+        }
+        return assemble(sweep, main, fits, route);
+    }
+
+    private TraceFit fitTrace(double[] f, Trace trace, Topology topology, Method method) throws FitException {
+        Method chosen = method != null ? method : trace.phaseKnown() ? Method.COMPLEX_CIRCLE : Method.LORENTZIAN;
+        if (chosen == Method.COMPLEX_CIRCLE && !trace.phaseKnown()) {
+            throw new FitException("the complex-circle fit needs phase, and this trace is magnitude only");
+        }
+        switch (chosen) {
+            case COMPLEX_CIRCLE: {
+                CircleFit fit = circle.fit(f, trace.re(), trace.im(), topology);
+                return new TraceFit(fit.parameters(), fit.covariance(), p -> ResonanceShape.of(fit.model(p)),
+                        fit.model(), Method.COMPLEX_CIRCLE, fit.sigma(), NoiseEstimate.complexSigma(trace.re(), trace.im()));
+            }
+            case LORENTZIAN:
+                return lorentzian.fit(f, magnitude(trace), topology);
+            default:
+                return halfPower.fit(f, magnitude(trace), topology);
+        }
+    }
+
+    /** S11 and S22 circles when both are there with phase and show a resonance; empty otherwise. */
+    private Optional<List<TraceFit>> fitPorts(Sweep sweep) {
+        Optional<Trace> s11 = sweep.trace(SParameter.S11);
+        Optional<Trace> s22 = sweep.trace(SParameter.S22);
+        if (s11.isEmpty() || s22.isEmpty() || !s11.get().phaseKnown() || !s22.get().phaseKnown()) {
+            return Optional.empty();
+        }
+        try {
+            TraceFit f11 = fitTrace(sweep.frequencyHz(), s11.get(), Topology.REFLECTION, Method.COMPLEX_CIRCLE);
+            TraceFit f22 = fitTrace(sweep.frequencyHz(), s22.get(), Topology.REFLECTION, Method.COMPLEX_CIRCLE);
+            if (!usable(f11) || !usable(f22)) {
+                return Optional.empty();
+            }
+            return Optional.of(List.of(f11, f22));
+        } catch (FitException e) {
+            return Optional.empty();
+        }
+    }
+
+    /** A port circle is usable when it has a background to normalize by and stands out of the noise. */
+    private static boolean usable(TraceFit fit) {
+        ResonanceShape s = fit.shape();
+        return s.background() > 0 && s.amplitude() > 5 * fit.residualSigma() && s.relativeDiameter() < 2
+                && s.qLoaded() > 0 && Double.isFinite(s.qLoaded());
+    }
+
+    private static ResonanceResult assemble(Sweep sweep, Trace main, List<TraceFit> fits, CouplingRoute route)
+            throws FitException {
+        TraceFit mainFit = fits.get(0);
+        ResonanceShape shape = mainFit.shape();
+        double[] f = sweep.frequencyHz();
+        checkPhysical(shape, f, route, fits);
+        Coupling coupling = CouplingCorrection.apply(route, shapesOf(fits));
+        if (!(coupling.qUnloaded() > 0) || !Double.isFinite(coupling.qUnloaded())) {
+            throw new FitException(String.format(
+                    "the coupling correction gives no finite positive Qu (QL %.4g, circle %.4g); check the topology and calibration",
+                    shape.qLoaded(), shape.amplitude()));
+        }
+        double sigmaQu = Propagation.standardUncertainty(fits, s -> CouplingCorrection.apply(route, s).qUnloaded());
+        List<TraceFit> mainOnly = List.of(mainFit);
+        double sigmaQl = Propagation.standardUncertainty(mainOnly, s -> s.get(0).qLoaded());
+        double sigmaF0 = Propagation.standardUncertainty(mainOnly, s -> s.get(0).f0Hz());
+
+        Set<QualityFlag> flags = EnumSet.noneOf(QualityFlag.class);
+        flags.addAll(QualityChecks.sweepDesign(f, shape.f0Hz(), shape.qLoaded()));
+        flags.addAll(QualityChecks.residuals(f, main.re(), main.im(), mainFit.model().hasPhase(), mainFit));
+        double snrDb = 20 * Math.log10(shape.amplitude() / mainFit.noiseSigma());
+        if (snrDb < QualityChecks.MIN_SNR_DB) {
+            flags.add(QualityFlag.LOW_SNR);
+        }
+        if (QualityChecks.strongCoupling(route, coupling, shape, shape.qLoaded())) {
+            flags.add(QualityFlag.STRONG_COUPLING);
+        }
+        if (route == CouplingRoute.TRANSMISSION_PORTS && portsDisagree(fits, coupling)) {
+            flags.add(QualityFlag.COUPLING_MISMATCH);
+        }
+        double residualRatio = mainFit.residualSigma() / mainFit.noiseSigma();
+        return new ResonanceResult(shape.f0Hz(), sigmaF0, shape.qLoaded(), sigmaQl,
+                coupling.qUnloaded(), sigmaQu, coupling.qExternal(), coupling.coupling1(), coupling.coupling2(),
+                coupling.resonanceDb(), mainFit.method(), route, snrDb, residualRatio, new ArrayList<>(flags),
+                mainFit.model());
+    }
+
+    private static void checkPhysical(ResonanceShape shape, double[] f, CouplingRoute route, List<TraceFit> fits)
+            throws FitException {
+        if (!(shape.qLoaded() > 0) || !Double.isFinite(shape.qLoaded())) {
+            throw new FitException("no resonance found: the fitted loaded Q is not a finite positive number");
+        }
+        double bandwidth = shape.f0Hz() / shape.qLoaded();
+        if (shape.f0Hz() < f[0] - bandwidth || shape.f0Hz() > f[f.length - 1] + bandwidth) {
+            throw new FitException(String.format("no resonance inside the sweep (fitted f0 %.6g Hz lies outside %.6g-%.6g Hz)",
+                    shape.f0Hz(), f[0], f[f.length - 1]));
+        }
+        if (route == CouplingRoute.TRANSMISSION_SYMMETRIC && shape.amplitude() >= 1) {
+            throw new FitException(String.format(
+                    "|S21(f0)| = %.4f is not below 1: Qu is undefined; check the calibration of the station", shape.amplitude()));
+        }
+        if (route == CouplingRoute.REFLECTION && shape.relativeDiameter() >= 2) {
+            throw new FitException("the reflection circle is larger than the unit circle allows; check the calibration");
+        }
+    }
+
+    private static boolean portsDisagree(List<TraceFit> fits, Coupling coupling) {
+        double measured = fits.get(0).shape().amplitude();
+        double predicted = CouplingCorrection.predictedTransmission(coupling);
+        double sigma = Propagation.standardUncertainty(List.of(fits.get(0)), s -> s.get(0).amplitude());
+        // 5 % relative, or three standard uncertainties when the data are noisier than that.
+        return Math.abs(measured - predicted) > Math.max(0.05 * predicted, 3 * sigma);
+    }
+
+    private static List<ResonanceShape> shapesOf(List<TraceFit> fits) {
+        List<ResonanceShape> shapes = new ArrayList<>(fits.size());
+        for (TraceFit fit : fits) {
+            shapes.add(fit.shape());
+        }
+        return shapes;
+    }
+
+    private static double[] magnitude(Trace trace) {
+        double[] m = new double[trace.size()];
+        for (int i = 0; i < m.length; i++) {
+            m[i] = trace.magnitude(i);
+        }
+        return m;
     }
 }

@@ -1,0 +1,32 @@
+package org.qfleet.fit;
+
+/**
+ * A converged circle fit in the estimator's normalized coordinates, with its covariance, and the
+ * mapping back to physical units so that any derived quantity can be propagated.
+ *
+ * @param parameters   normalized parameters ([br, bi,] ar, ai, x0, g, t)
+ * @param covariance   their covariance (sigma^2 (J^T J)^-1)
+ * @param referenceHz  frequency at x = 0
+ * @param scaleHz      hertz per unit of x
+ * @param background   whether B was fitted (else B = 0)
+ * @param sigma        residual standard deviation per real component
+ * @param points       number of complex points fitted
+ */
+record CircleFit(double[] parameters, double[][] covariance, double referenceHz, double scaleHz,
+                 boolean background, double sigma, int points) {
+
+    CircleModel model() {
+        return model(parameters);
+    }
+
+    /** The physical model for any parameter vector near the solution (for error propagation). */
+    CircleModel model(double[] p) {
+        int o = background ? 2 : 0;
+        double br = background ? p[0] : 0;
+        double bi = background ? p[1] : 0;
+        double f0 = referenceHz + scaleHz * p[o + 2];
+        double gamma = Math.abs(scaleHz * p[o + 3]);
+        double tau = p[o + 4] / (2 * Math.PI * scaleHz);
+        return new CircleModel(referenceHz, f0, gamma, tau, p[o], p[o + 1], br, bi);
+    }
+}

@@ -1,0 +1,240 @@
+package org.qfleet.fit;
+
+import java.util.Arrays;
+
+/**
+ * Model-free starting values for the circle fit, on normalized frequency x. Each step is cheap and
+ * only has to land the optimizer in the right valley.
+ */
+final class StartingPoint {
+
+    private StartingPoint() {
+    }
+
+    /**
+     * Resonance position and half width from the speed |dS/dx| along the trace: for
+     * A / (1 + j (x - x0) / g) the speed is |A| g / (g^2 + (x - x0)^2), a Lorentzian in x whose full
+     * width at half height is 2 g, whatever the background.
+     *
+     * @return {x0, g}
+     */
+    static double[] speedPeak(double[] x, double[] re, double[] im) {
+        int n = x.length;
+        double noise = NoiseEstimate.complexSigma(re, im);
+        // Difference over a baseline of 2m points, m doubled until the largest step stands well out of
+        // the noise (|dz| of pure noise averages 1.8 sigma): long baselines see through noise, short ones resolve narrow lines.
+        int m = 1;
+        double[] d = differences(re, im, m);
+        while (4 * m < n / 4 && max(d) < 12 * noise) {
+            m *= 2;
+            d = differences(re, im, m);
+        }
+        double[] v = new double[n];
+        for (int i = m; i < n - m; i++) {
+            v[i] = d[i] / (x[i + m] - x[i - m]);
+        }
+        for (int i = 0; i < m; i++) {
+            v[i] = v[m];
+            v[n - 1 - i] = v[n - 1 - m];
+        }
+        double[] s = smooth(v, Math.max(1, m / 2));
+        int k = 0;
+        for (int i = 1; i < n; i++) {
+            if (s[i] > s[k]) {
+                k = i;
+            }
+        }
+        double[] sorted = s.clone();
+        Arrays.sort(sorted);
+        double pedestal = sorted[n / 2];
+        double half = pedestal + 0.5 * (s[k] - pedestal);
+        double left = crossing(x, s, k, -1, half);
+        double right = crossing(x, s, k, +1, half);
+        double x0 = x[k];
+        if (k > 0 && k < n - 1) {
+            double denom = s[k - 1] - 2 * s[k] + s[k + 1];
+            if (denom < 0) {
+                double shift = 0.5 * (s[k - 1] - s[k + 1]) / denom;
+                x0 = x[k] + Math.max(-1, Math.min(1, shift)) * 0.5 * (x[k + 1] - x[k - 1]);
+            }
+        }
+        double width;
+        if (Double.isNaN(left) && Double.isNaN(right)) {
+            width = x[n - 1] - x[0];
+        } else if (Double.isNaN(left)) {
+            width = 2 * (right - x0);
+        } else if (Double.isNaN(right)) {
+            width = 2 * (x0 - left);
+        } else {
+            width = right - left;
+        }
+        double step = (x[n - 1] - x[0]) / (n - 1);
+        // The baseline broadens the line by about its own length; take that back out.
+        double baseline = 2 * m * step;
+        double corrected = Math.sqrt(Math.max(width * width - baseline * baseline, 0.25 * baseline * baseline));
+        return new double[] {x0, Math.max(0.5 * corrected, 0.5 * step)};
+    }
+
+    private static double[] differences(double[] re, double[] im, int m) {
+        double[] d = new double[re.length];
+        for (int i = m; i < re.length - m; i++) {
+            d[i] = Math.hypot(re[i + m] - re[i - m], im[i + m] - im[i - m]);
+        }
+        return d;
+    }
+
+    private static double max(double[] v) {
+        double m = 0;
+        for (double e : v) {
+            m = Math.max(m, e);
+        }
+        return m;
+    }
+
+    private static double crossing(double[] x, double[] s, int k, int direction, double level) {
+        for (int i = k + direction; i >= 0 && i < s.length; i += direction) {
+            if (s[i] < level) {
+                int j = i - direction;
+                double fraction = (s[j] - level) / (s[j] - s[i]);
+                return x[j] + fraction * (x[i] - x[j]);
+            }
+        }
+        return Double.NaN;
+    }
+
+    private static double[] smooth(double[] v, int halfWindow) {
+        int n = v.length;
+        double[] s = new double[n];
+        for (int i = 0; i < n; i++) {
+            int lo = Math.max(0, i - halfWindow);
+            int hi = Math.min(n - 1, i + halfWindow);
+            double sum = 0;
+            for (int j = lo; j <= hi; j++) {
+                sum += v[j];
+            }
+            s[i] = sum / (hi - lo + 1);
+        }
+        return s;
+    }
+
+    /**
+     * Delay from the phase slope: between neighbouring points the slope is -t plus the resonance's
+     * own contribution, shaped like g / (g^2 + (x - x0)^2) for a transmission peak. A weighted
+     * regression on both (weights |S|^2 dx^2, the inverse variance of a phase slope) separates them.
+     *
+     * @return t = 2 pi tau scale
+     */
+    static double delay(double[] x, double[] re, double[] im, double x0, double g) {
+        double sw = 0, swh = 0, swhh = 0, sws = 0, swhs = 0;
+        for (int i = 0; i < x.length - 1; i++) {
+            double cr = re[i + 1] * re[i] + im[i + 1] * im[i];
+            double ci = im[i + 1] * re[i] - re[i + 1] * im[i];
+            double dx = x[i + 1] - x[i];
+            double slope = Math.atan2(ci, cr) / dx;
+            double xm = 0.5 * (x[i] + x[i + 1]) - x0;
+            double h = g / (g * g + xm * xm);
+            double w = Math.hypot(cr, ci) * dx * dx;
+            sw += w;
+            swh += w * h;
+            swhh += w * h * h;
+            sws += w * slope;
+            swhs += w * h * slope;
+        }
+        double det = sw * swhh - swh * swh;
+        if (!(Math.abs(det) > 1e-30 * sw * swhh) || sw == 0) {
+            return sw == 0 ? 0 : -sws / sw;
+        }
+        double intercept = (swhh * sws - swh * swhs) / det;
+        return -intercept;
+    }
+
+    /** Picks the delay with the smallest residual on a grid around the estimate, then refines it by a parabola. */
+    static double refineDelay(double[] x, double[] re, double[] im, double x0, double g, double t, boolean background) {
+        double step = 0.4;
+        int half = 8;
+        boolean uniform = Phasors.equallySpaced(x);
+        double[] cos = new double[x.length];
+        double[] sin = new double[x.length];
+        double[] cost = new double[2 * half + 1];
+        int best = 0;
+        for (int k = -half; k <= half; k++) {
+            Phasors.fill(t + k * step, x, uniform, cos, sin);
+            cost[k + half] = residual(x, re, im, x0, g, cos, sin, background);
+            if (cost[k + half] < cost[best]) {
+                best = k + half;
+            }
+        }
+        double tBest = t + (best - half) * step;
+        if (best > 0 && best < cost.length - 1) {
+            double denom = cost[best - 1] - 2 * cost[best] + cost[best + 1];
+            if (denom > 0) {
+                tBest += 0.5 * step * (cost[best - 1] - cost[best + 1]) / denom;
+            }
+        }
+        return tBest;
+    }
+
+    private static double residual(double[] x, double[] re, double[] im, double x0, double g,
+                                   double[] cos, double[] sin, boolean background) {
+        double[] a = linearAmplitudes(x, re, im, x0, g, cos, sin, background);
+        double cost = 0;
+        for (int i = 0; i < x.length; i++) {
+            double c = cos[i];
+            double s = sin[i];
+            double wr = c * re[i] + s * im[i];
+            double wi = c * im[i] - s * re[i];
+            double u = x[i] - x0;
+            double d = 1 / (g * g + u * u);
+            double lr = g * g * d;
+            double li = -g * u * d;
+            double rr = wr - a[0] - (a[2] * lr - a[3] * li);
+            double ri = wi - a[1] - (a[2] * li + a[3] * lr);
+            cost += rr * rr + ri * ri;
+        }
+        return cost;
+    }
+
+    static double[] linearAmplitudes(double[] x, double[] re, double[] im, double x0, double g, double t, boolean background) {
+        double[] cos = new double[x.length];
+        double[] sin = new double[x.length];
+        Phasors.fill(t, x, Phasors.equallySpaced(x), cos, sin);
+        return linearAmplitudes(x, re, im, x0, g, cos, sin, background);
+    }
+
+    /**
+     * Background B and resonance A by linear least squares for a fixed position, width and delay.
+     *
+     * @return {br, bi, ar, ai} (B = 0 without background)
+     */
+    static double[] linearAmplitudes(double[] x, double[] re, double[] im, double x0, double g,
+                                     double[] cos, double[] sin, boolean background) {
+        int n = x.length;
+        double s1r = 0, s1i = 0, s2 = 0, y0r = 0, y0i = 0, y1r = 0, y1i = 0;
+        for (int i = 0; i < n; i++) {
+            double c = cos[i];
+            double s = sin[i];
+            double wr = c * re[i] + s * im[i];
+            double wi = c * im[i] - s * re[i];
+            double u = x[i] - x0;
+            double d = 1 / (g * g + u * u);
+            double lr = g * g * d;
+            double li = -g * u * d;
+            s1r += lr;
+            s1i += li;
+            s2 += lr * lr + li * li;
+            y0r += wr;
+            y0i += wi;
+            y1r += lr * wr + li * wi;
+            y1i += lr * wi - li * wr;
+        }
+        if (!background) {
+            return new double[] {0, 0, y1r / s2, y1i / s2};
+        }
+        double det = n * s2 - (s1r * s1r + s1i * s1i);
+        double br = (s2 * y0r - (s1r * y1r - s1i * y1i)) / det;
+        double bi = (s2 * y0i - (s1r * y1i + s1i * y1r)) / det;
+        double ar = (n * y1r - (s1r * y0r + s1i * y0i)) / det;
+        double ai = (n * y1i - (s1r * y0i - s1i * y0r)) / det;
+        return new double[] {br, bi, ar, ai};
+    }
+}
