@@ -9,11 +9,12 @@ package org.qfleet.fit;
  * @param referenceHz  frequency at x = 0
  * @param scaleHz      hertz per unit of x
  * @param background   whether B was fitted (else B = 0)
+ * @param tilt         whether a magnitude slope was fitted (the last parameter)
  * @param sigma        residual standard deviation per real component
  * @param points       number of complex points fitted
  */
 record CircleFit(double[] parameters, double[][] covariance, double referenceHz, double scaleHz,
-                 boolean background, double sigma, int points) {
+                 boolean background, boolean tilt, double sigma, int points) {
 
     CircleModel model() {
         return model(parameters);
@@ -27,6 +28,7 @@ record CircleFit(double[] parameters, double[][] covariance, double referenceHz,
         double f0 = referenceHz + scaleHz * p[o + 2];
         double gamma = Math.abs(scaleHz * p[o + 3]);
         double tau = p[o + 4] / (2 * Math.PI * scaleHz);
-        return new CircleModel(referenceHz, f0, gamma, tau, p[o], p[o + 1], br, bi);
+        double slope = tilt ? p[o + 5] / scaleHz : 0;
+        return new CircleModel(referenceHz, f0, gamma, tau, p[o], p[o + 1], br, bi, slope);
     }
 }

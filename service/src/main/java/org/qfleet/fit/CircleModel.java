@@ -1,15 +1,17 @@
 package org.qfleet.fit;
 
 /**
- * The resonance circle with delay: S(f) = exp(-j 2 pi (f - fRef) tau) (B + A / (1 + j (f - f0) / gamma)),
- * where gamma = f0 / (2 QL) is the half width at half power, A the complex resonance (the circle's
+ * The resonance circle with delay and tilt:
+ * S(f) = exp(-j 2 pi (f - fRef) tau) (1 + k (f - fRef)) (B + A / (1 + j (f - f0) / gamma)),
+ * where gamma = f0 / (2 QL) is the half width at half power, k a real magnitude slope, A the complex resonance (the circle's
  * diameter as a vector) and B the complex background (leakage, or the off-resonance level of a
  * notch or a reflection). The phase of A relative to B is the rotation from coupling reactance
  * (Kajfez, IEEE Trans. MTT 1994; Probst et al., Rev. Sci. Instrum. 86, 024706, 2015).
  */
 public record CircleModel(
         double referenceHz, double f0Hz, double halfWidthHz, double delaySeconds,
-        double amplitudeRe, double amplitudeIm, double backgroundRe, double backgroundIm) implements ResponseModel {
+        double amplitudeRe, double amplitudeIm, double backgroundRe, double backgroundIm, double tiltPerHz)
+        implements ResponseModel {
 
     public double qLoaded() {
         return f0Hz / (2 * halfWidthHz);
@@ -32,8 +34,9 @@ public record CircleModel(
         double mr = backgroundRe + amplitudeRe * lr - amplitudeIm * li;
         double mi = backgroundIm + amplitudeRe * li + amplitudeIm * lr;
         double phase = -2 * Math.PI * (frequencyHz - referenceHz) * delaySeconds;
-        double c = Math.cos(phase);
-        double s = Math.sin(phase);
+        double gain = 1 + tiltPerHz * (frequencyHz - referenceHz);
+        double c = gain * Math.cos(phase);
+        double s = gain * Math.sin(phase);
         reIm[0] = mr * c - mi * s;
         reIm[1] = mr * s + mi * c;
     }

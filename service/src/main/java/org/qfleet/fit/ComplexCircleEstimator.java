@@ -37,9 +37,9 @@ final class ComplexCircleEstimator {
         CircleFit best;
         if (topology == Topology.TRANSMISSION) {
             double[] a = StartingPoint.linearAmplitudes(x, re, im, x0, g, t, false);
-            CircleProblem plain = new CircleProblem(x, re, im, false);
+            CircleProblem plain = new CircleProblem(x, re, im, false, false);
             LevenbergMarquardt.Solution s5 = LevenbergMarquardt.solve(plain, new double[] {a[2], a[3], x0, g, t});
-            CircleProblem withBackground = new CircleProblem(x, re, im, true);
+            CircleProblem withBackground = new CircleProblem(x, re, im, true, false);
             double[] p5 = s5.p();
             LevenbergMarquardt.Solution s7 = LevenbergMarquardt.solve(withBackground,
                     new double[] {0, 0, p5[0], p5[1], p5[2], p5[3], p5[4]});
@@ -49,9 +49,9 @@ final class ComplexCircleEstimator {
                     : toFit(s5, plain, n, referenceHz, scaleHz);
         } else {
             double[] a = StartingPoint.linearAmplitudes(x, re, im, x0, g, t, true);
-            CircleProblem problem = new CircleProblem(x, re, im, true);
+            CircleProblem problem = new CircleProblem(x, re, im, true, true);
             LevenbergMarquardt.Solution s = LevenbergMarquardt.solve(problem,
-                    new double[] {a[0], a[1], a[2], a[3], x0, g, t});
+                    new double[] {a[0], a[1], a[2], a[3], x0, g, t, 0});
             best = toFit(s, problem, n, referenceHz, scaleHz);
         }
         return best;
@@ -75,6 +75,6 @@ final class ComplexCircleEstimator {
         if (!(Math.abs(p[o + 3]) > 0) || !Double.isFinite(p[o + 3])) {
             throw new FitException("no resonance found: the fitted width is zero or not finite");
         }
-        return new CircleFit(p, inverse, referenceHz, scaleHz, problem.background(), Math.sqrt(sigma2), n);
+        return new CircleFit(p, inverse, referenceHz, scaleHz, problem.background(), problem.tilt(), Math.sqrt(sigma2), n);
     }
 }

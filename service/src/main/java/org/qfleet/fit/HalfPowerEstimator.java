@@ -38,7 +38,7 @@ final class HalfPowerEstimator {
         c[3][3] = sigmaBackground * sigmaBackground;
         double cos = s.cosRotation();
         ResponseModel model = new CircleModel(s.f0Hz(), s.f0Hz(), s.f0Hz() / (2 * s.qLoaded()), 0,
-                topology == Topology.TRANSMISSION ? s.amplitude() : -s.amplitude(), 0, s.background(), 0);
+                topology == Topology.TRANSMISSION ? s.amplitude() : -s.amplitude(), 0, s.background(), 0, 0);
         return new TraceFit(p, c, q -> new ResonanceShape(q[0], q[1], q[2], q[3], cos),
                 magnitudeOnly(model), Method.HALF_POWER, Double.NaN, noise);
     }

@@ -1,12 +1,17 @@
 package org.qfleet.fit;
 
-/** Maps the Lorentzian parameters to the resonance shape and to a magnitude-only response. */
-record LorentzianShape(double referenceHz, double scaleHz, boolean background) {
+/**
+ * Maps the Lorentzian parameters to the resonance shape and to a magnitude-only response.
+ *
+ * @param asymmetric whether the asymmetry term c is significant; when it is not, it is read as zero,
+ *                   because c enters |A| squared and its noise alone would bias the circle size
+ */
+record LorentzianShape(double referenceHz, double scaleHz, boolean background, boolean asymmetric) {
 
     ResonanceShape shape(double[] p) {
         double b0 = background ? Math.max(0, p[0]) : 0;
         double a = background ? p[1] : p[0];
-        double c = background ? p[2] : 0;
+        double c = background && asymmetric ? p[2] : 0;
         int o = background ? 2 : 0;
         double f0 = referenceHz + scaleHz * p[o + 1];
         double gamma = Math.abs(scaleHz * p[o + 2]);
@@ -19,7 +24,7 @@ record LorentzianShape(double referenceHz, double scaleHz, boolean background) {
         double amplitude = Math.sqrt(Math.max(0, u));
         double bg = Math.sqrt(b0);
         double cos = (amplitude > 0 && bg > 0) ? -(a - u) / (2 * amplitude * bg) : 1;
-        return new ResonanceShape(f0, f0 / (2 * gamma), amplitude, bg, Math.max(-1, Math.min(1, cos)));
+        return ResonanceShape.fromHalfPowerBand(f0, gamma, amplitude, bg, Math.max(-1, Math.min(1, cos)));
     }
 
     ResponseModel model(double[] p) {

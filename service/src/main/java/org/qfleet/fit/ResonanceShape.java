@@ -18,7 +18,29 @@ record ResonanceShape(double f0Hz, double qLoaded, double amplitude, double back
         double cos = (a > 0 && b > 0)
                 ? -(m.amplitudeRe() * m.backgroundRe() + m.amplitudeIm() * m.backgroundIm()) / (a * b)
                 : 1;
-        return new ResonanceShape(m.f0Hz(), m.qLoaded(), a, b, cos);
+        return fromPole(m.f0Hz(), m.halfWidthHz(), a, b, cos);
+    }
+
+    /**
+     * From the complex pole fc + j gamma of a fitted circle. A real resonator responds as
+     * 1 / (1 + j QL (f/f0 - f0/f)), whose pole near f0 lies at sqrt(f0^2 - gamma^2) + j gamma, with
+     * gamma = f0 / (2 QL) (roots of j QL f^2 + f0 f - j QL f0^2 = 0), so f0 = sqrt(fc^2 + gamma^2).
+     */
+    static ResonanceShape fromPole(double centreHz, double halfWidthHz, double amplitude, double background,
+                                   double cosRotation) {
+        double f0 = Math.sqrt(centreHz * centreHz + halfWidthHz * halfWidthHz);
+        return new ResonanceShape(f0, f0 / (2 * halfWidthHz), amplitude, background, cosRotation);
+    }
+
+    /**
+     * From the centre and half width of the half-power band of |S|^2. For the same response the band
+     * is exactly f0 / QL wide and centred at sqrt(f0^2 + gamma^2), about f0 / (8 QL^2) above f0
+     * (solving QL (f/f0 - f0/f) = +-1).
+     */
+    static ResonanceShape fromHalfPowerBand(double centreHz, double halfWidthHz, double amplitude, double background,
+                                            double cosRotation) {
+        double f0 = Math.sqrt(Math.max(0, centreHz * centreHz - halfWidthHz * halfWidthHz));
+        return new ResonanceShape(f0, f0 / (2 * halfWidthHz), amplitude, background, cosRotation);
     }
 
     /** Circle diameter relative to the background: S21 dip depth of a notch, D of a reflection. */

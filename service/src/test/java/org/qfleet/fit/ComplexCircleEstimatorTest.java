@@ -37,7 +37,7 @@ class ComplexCircleEstimatorTest {
 
     @Test
     void recoversAnExactCircleWithDelayLeakageAndRotation() throws FitException {
-        CircleModel truth = new CircleModel(3.6e9, 3.6001e9, 3.6e9 / (2 * 850), 12e-9, 0.04, -0.05, 0.02, 0.01);
+        CircleModel truth = new CircleModel(3.6001e9, 3.6001e9, 3.6e9 / (2 * 850), 12e-9, 0.04, -0.05, 0.02, 0.01, 1e-9);
         double[][] d = sample(truth, 10, 0, 1);
         CircleFit fit = new ComplexCircleEstimator().fit(d[0], d[1], d[2], Topology.NOTCH);
         CircleModel m = fit.model();
@@ -46,11 +46,12 @@ class ComplexCircleEstimatorTest {
         assertThat(m.delaySeconds()).isCloseTo(truth.delaySeconds(), within(1e-15));
         assertThat(m.amplitude()).isCloseTo(truth.amplitude(), within(1e-9));
         assertThat(m.background()).isCloseTo(truth.background(), within(1e-9));
+        assertThat(m.tiltPerHz()).isCloseTo(truth.tiltPerHz(), within(1e-15));
     }
 
     @Test
     void agreesWithCommonsMathLevenbergMarquardtOnNoisyData() throws FitException {
-        CircleModel truth = new CircleModel(10.4e9, 10.4e9 + 2e5, 10.4e9 / (2 * 5400), 4e-9, 0.08, 0.03, -0.6, 0.7);
+        CircleModel truth = new CircleModel(10.4e9, 10.4e9 + 2e5, 10.4e9 / (2 * 5400), 4e-9, 0.08, 0.03, -0.6, 0.7, -2e-9);
         double[][] d = sample(truth, 8, 0.002, 11);
         CircleFit ours = new ComplexCircleEstimator().fit(d[0], d[1], d[2], Topology.NOTCH);
 
@@ -88,12 +89,12 @@ class ComplexCircleEstimatorTest {
     private static Pair<RealVector, org.apache.commons.math3.linear.RealMatrix> circleWithJacobian(double[] x, double[] p) {
         int n = x.length;
         double[] value = new double[2 * n];
-        double[][] jac = new double[2 * n][7];
+        double[][] jac = new double[2 * n][p.length];
         for (int i = 0; i < n; i++) {
             double[] base = circle(x[i], p);
             value[2 * i] = base[0];
             value[2 * i + 1] = base[1];
-            for (int k = 0; k < 7; k++) {
+            for (int k = 0; k < p.length; k++) {
                 double h = 1e-7 * Math.max(1e-3, Math.abs(p[k]));
                 double[] q = p.clone();
                 q[k] += h;
@@ -107,7 +108,7 @@ class ComplexCircleEstimatorTest {
         return new Pair<>(new ArrayRealVector(value), new Array2DRowRealMatrix(jac, false));
     }
 
-    /** exp(-j t x) (B + A g / (g + j (x - x0))), p = [br, bi, ar, ai, x0, g, t]. */
+    /** exp(-j t x) (1 + s x) (B + A g / (g + j (x - x0))), p = [br, bi, ar, ai, x0, g, t, s]. */
     private static double[] circle(double x, double[] p) {
         double u = x - p[4];
         double g = p[5];
@@ -116,8 +117,9 @@ class ComplexCircleEstimatorTest {
         double li = -g * u / den;
         double mr = p[0] + p[2] * lr - p[3] * li;
         double mi = p[1] + p[2] * li + p[3] * lr;
-        double c = Math.cos(p[6] * x);
-        double s = -Math.sin(p[6] * x);
+        double gain = 1 + p[7] * x;
+        double c = gain * Math.cos(p[6] * x);
+        double s = -gain * Math.sin(p[6] * x);
         return new double[] {mr * c - mi * s, mr * s + mi * c};
     }
 }
