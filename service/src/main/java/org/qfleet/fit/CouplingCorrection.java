@@ -12,8 +12,16 @@ final class CouplingCorrection {
     }
 
     static Coupling apply(CouplingRoute route, List<ResonanceShape> shapes) {
+        return apply(route, shapes, null);
+    }
+
+    /**
+     * @param loadedQWeights weights of each shape's QL in the loaded Q used (one resonance loaded by
+     *                       all ports has one QL, seen in every trace); null to use the main trace's
+     */
+    static Coupling apply(CouplingRoute route, List<ResonanceShape> shapes, double[] loadedQWeights) {
         ResonanceShape main = shapes.get(0);
-        double ql = main.qLoaded();
+        double ql = loadedQ(shapes, loadedQWeights);
         switch (route) {
             case TRANSMISSION_SYMMETRIC: {
                 // |S21(f0)| = 2 beta / (1 + 2 beta), Qu = QL / (1 - |S21(f0)|): coupled-resonator two-port,
@@ -51,6 +59,19 @@ final class CouplingCorrection {
             default:
                 throw new IllegalArgumentException(route.toString());
         }
+    }
+
+    static double loadedQ(List<ResonanceShape> shapes, double[] weights) {
+        if (weights == null) {
+            return shapes.get(0).qLoaded();
+        }
+        double sum = 0;
+        double total = 0;
+        for (int i = 0; i < weights.length; i++) {
+            sum += weights[i] * shapes.get(i).qLoaded();
+            total += weights[i];
+        }
+        return sum / total;
     }
 
     /** |S21(f0)| that the couplings of the ports route predict: 2 sqrt(b1 b2) / (1 + b1 + b2). */

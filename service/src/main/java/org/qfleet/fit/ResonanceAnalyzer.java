@@ -101,16 +101,19 @@ public final class ResonanceAnalyzer {
         ResonanceShape shape = mainFit.shape();
         double[] f = sweep.frequencyHz();
         checkPhysical(shape, f, route, fits);
-        Coupling coupling = CouplingCorrection.apply(route, shapesOf(fits));
+        double[] weights = route == CouplingRoute.TRANSMISSION_PORTS ? inverseVariances(fits, s -> s.qLoaded()) : null;
+        double[] f0Weights = route == CouplingRoute.TRANSMISSION_PORTS ? inverseVariances(fits, s -> s.f0Hz()) : null;
+        Coupling coupling = CouplingCorrection.apply(route, shapesOf(fits), weights);
         if (!(coupling.qUnloaded() > 0) || !Double.isFinite(coupling.qUnloaded())) {
             throw new FitException(String.format(
                     "the coupling correction gives no finite positive Qu (QL %.4g, circle %.4g); check the topology and calibration",
                     shape.qLoaded(), shape.amplitude()));
         }
-        double sigmaQu = Propagation.standardUncertainty(fits, s -> CouplingCorrection.apply(route, s).qUnloaded());
-        List<TraceFit> mainOnly = List.of(mainFit);
-        double sigmaQl = Propagation.standardUncertainty(mainOnly, s -> s.get(0).qLoaded());
-        double sigmaF0 = Propagation.standardUncertainty(mainOnly, s -> s.get(0).f0Hz());
+        double sigmaQu = Propagation.standardUncertainty(fits, s -> CouplingCorrection.apply(route, s, weights).qUnloaded());
+        double ql = CouplingCorrection.loadedQ(shapesOf(fits), weights);
+        double sigmaQl = Propagation.standardUncertainty(fits, s -> CouplingCorrection.loadedQ(s, weights));
+        double f0 = weightedMean(shapesOf(fits), f0Weights, ResonanceShape::f0Hz);
+        double sigmaF0 = Propagation.standardUncertainty(fits, s -> weightedMean(s, f0Weights, ResonanceShape::f0Hz));
 
         Set<QualityFlag> flags = EnumSet.noneOf(QualityFlag.class);
         flags.addAll(QualityChecks.sweepDesign(f, shape.f0Hz(), shape.qLoaded()));
@@ -126,7 +129,7 @@ public final class ResonanceAnalyzer {
             flags.add(QualityFlag.COUPLING_MISMATCH);
         }
         double residualRatio = mainFit.residualSigma() / mainFit.noiseSigma();
-        return new ResonanceResult(shape.f0Hz(), sigmaF0, shape.qLoaded(), sigmaQl,
+        return new ResonanceResult(f0, sigmaF0, ql, sigmaQl,
                 coupling.qUnloaded(), sigmaQu, coupling.qExternal(), coupling.coupling1(), coupling.coupling2(),
                 coupling.resonanceDb(), mainFit.method(), route, snrDb, residualRatio, new ArrayList<>(flags),
                 mainFit.model());
@@ -157,6 +160,33 @@ public final class ResonanceAnalyzer {
         double sigma = Propagation.standardUncertainty(List.of(fits.get(0)), s -> s.get(0).amplitude());
         // 5 % relative, or three standard uncertainties when the data are noisier than that.
         return Math.abs(measured - predicted) > Math.max(0.05 * predicted, 3 * sigma);
+    }
+
+    /**
+     * Inverse variances of one quantity in each fit: the traces of one resonance are independent
+     * measurements of the same f0 and QL, best combined by these weights.
+     */
+    private static double[] inverseVariances(List<TraceFit> fits, java.util.function.ToDoubleFunction<ResonanceShape> quantity) {
+        double[] w = new double[fits.size()];
+        for (int i = 0; i < w.length; i++) {
+            double sigma = Propagation.standardUncertainty(List.of(fits.get(i)), s -> quantity.applyAsDouble(s.get(0)));
+            w[i] = sigma > 0 ? 1 / (sigma * sigma) : (i == 0 ? 1 : 0);
+        }
+        return w;
+    }
+
+    private static double weightedMean(List<ResonanceShape> shapes, double[] weights,
+                                       java.util.function.ToDoubleFunction<ResonanceShape> quantity) {
+        if (weights == null) {
+            return quantity.applyAsDouble(shapes.get(0));
+        }
+        double sum = 0;
+        double total = 0;
+        for (int i = 0; i < weights.length; i++) {
+            sum += weights[i] * quantity.applyAsDouble(shapes.get(i));
+            total += weights[i];
+        }
+        return sum / total;
     }
 
     private static List<ResonanceShape> shapesOf(List<TraceFit> fits) {
