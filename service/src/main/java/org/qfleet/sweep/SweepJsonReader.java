@@ -25,6 +25,7 @@ public final class SweepJsonReader {
             .disable(StreamReadFeature.AUTO_CLOSE_SOURCE)
             .build();
     private static final int MAX_MESSAGE_SHOWN = 160;
+    private static final String[] PARSER_HINTS = {" (start marker at", ": enable `", " at [Source"};
 
     private final SweepLimits limits;
 
@@ -89,8 +90,13 @@ public final class SweepJsonReader {
         return new InvalidSweepException(SweepError.UNREADABLE, "cannot read the message: " + oneLine(e.getMessage()), e);
     }
 
+    /** The parser's message on one line, without its hints about parser settings. */
     private static String oneLine(String message) {
         String text = String.valueOf(message).replace('\n', ' ').replace('\r', ' ');
+        for (String hint : PARSER_HINTS) {
+            int at = text.indexOf(hint);
+            text = at > 0 ? text.substring(0, at) : text;
+        }
         return text.length() <= MAX_MESSAGE_SHOWN ? text : text.substring(0, MAX_MESSAGE_SHOWN) + "...";
     }
 }
