@@ -92,7 +92,8 @@ public final class SweepJsonReader {
 
     /** The parser's message on one line, without its hints about parser settings. */
     private static String oneLine(String message) {
-        String text = String.valueOf(message).replace('\n', ' ').replace('\r', ' ');
+        String text = String.valueOf(message).replace('\n', ' ').replace('\r', ' ')
+                .replaceAll(", from `[^`]*`\\)", ")");
         for (String hint : PARSER_HINTS) {
             int at = text.indexOf(hint);
             text = at > 0 ? text.substring(0, at) : text;

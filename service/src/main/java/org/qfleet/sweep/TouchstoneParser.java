@@ -50,13 +50,13 @@ final class TouchstoneParser {
             int number = lines.lineNumber();
             if (first) {
                 first = false;
-                if (keywordName(line, number).equalsIgnoreCase("version")) {
+                if (keywordName(line).equalsIgnoreCase("version")) {
                     version(line, number);
                     continue;
                 }
             }
             if (section == Section.INFORMATION) {
-                if (keywordName(line, number).equalsIgnoreCase("end information")) {
+                if (keywordName(line).equalsIgnoreCase("end information")) {
                     section = Section.HEADER;
                 }
                 continue;
@@ -93,7 +93,10 @@ final class TouchstoneParser {
     }
 
     private void keyword(String line, int number) throws InvalidSweepException {
-        String name = keywordName(line, number);
+        if (line.indexOf(']') < 0) {
+            throw syntax(number, "keyword without a closing ']'");
+        }
+        String name = keywordName(line);
         if (!version2) {
             throw syntax(number, "keyword [" + name + "] in a file without [Version] 2.0 on its first line");
         }
@@ -238,16 +241,10 @@ final class TouchstoneParser {
         }
     }
 
-    /** The name between the brackets of a keyword line, or "" when the line is not a keyword. */
-    private static String keywordName(String line, int number) throws InvalidSweepException {
-        if (line.charAt(0) != '[') {
-            return "";
-        }
+    /** The name between the brackets of a keyword line, or "" when the line is not a whole keyword. */
+    private static String keywordName(String line) {
         int close = line.indexOf(']');
-        if (close < 0) {
-            throw syntax(number, "keyword without a closing ']'");
-        }
-        return line.substring(1, close).trim();
+        return line.charAt(0) != '[' || close < 0 ? "" : line.substring(1, close).trim();
     }
 
     private static String withoutComment(String raw) {

@@ -274,6 +274,15 @@ class SweepJsonReaderTest {
     }
 
     @Test
+    void rejectsPathologicalNestingAndNumbersWithoutFailing() {
+        String deep = SweepMessage.valid().with("extra", "[".repeat(100_000)).json();
+        assertError(deep, SweepError.INVALID_JSON);
+        String longNumber = "1" + "0".repeat(5000);
+        assertError(SweepMessage.valid().with("frequencyHz", "[" + longNumber + "]").json(), SweepError.INVALID_JSON)
+                .hasMessageContaining("length").hasMessageNotContaining("StreamReadConstraints");
+    }
+
+    @Test
     void attachesTheSweepIdWhenItWasRead() {
         assertThatThrownBy(() -> reader.read("m", SweepMessage.valid().with("topology", "\"thru\"").bytes()))
                 .isInstanceOfSatisfying(InvalidSweepException.class,

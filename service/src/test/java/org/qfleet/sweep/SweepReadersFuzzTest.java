@@ -47,7 +47,7 @@ class SweepReadersFuzzTest {
     void mutatedMessagesNeverEscapeAsAnotherException() {
         Random random = new Random(7L);
         byte[] message = SweepMessage.valid().with("s22", "{\"mag\":[1,1,1,1,1,1,1],\"deg\":[0,1,2,3,4,5,6]}").bytes();
-        for (int i = 0; i < 8_000; i++) {
+        for (int i = 0; i < 5_000; i++) {
             byte[] mutated = mutate(message, random, JSON_ALPHABET);
             jsonOutcome(mutated);
             if (i % 10 == 0) {
@@ -66,7 +66,7 @@ class SweepReadersFuzzTest {
                     + "[Number of Frequencies] 2\n[Reference] 50\n50\n[Network Data]\n1 -1 0 -2 0 -3 0 -4 0\n"
                     + "2 -1 0 -2 0\n -3 0 -4 0\n[End]\n"};
         byte[] alphabet = TOUCHSTONE_ALPHABET.getBytes(StandardCharsets.ISO_8859_1);
-        for (int i = 0; i < 8_000; i++) {
+        for (int i = 0; i < 5_000; i++) {
             byte[] seed = seeds[i % 2].getBytes(StandardCharsets.ISO_8859_1);
             String text = new String(mutate(seed, random, alphabet), StandardCharsets.ISO_8859_1);
             try {

@@ -268,6 +268,15 @@ class TouchstoneReaderTest {
     }
 
     @Test
+    void skipsTheInformationBlockWhateverItHolds() throws Exception {
+        Sweep sweep = read("[Version] 2.0\n[Number of Ports] 1\n[Number of Frequencies] 1\n[Begin Information]\n"
+                + "[\n# Z\n1 2 3 4\n[Number of Ports] 9\n[End Information]\n[Network Data]\n1 0.5 0\n", 1);
+        assertThat(sweep.size()).isEqualTo(1);
+        assertError(() -> read("[Version] 2.0\n[Number of Ports\n", 1), SweepError.TOUCHSTONE_SYNTAX)
+                .hasMessage("line 2: keyword without a closing ']'");
+    }
+
+    @Test
     void acceptsFullMatrixFormatAndKeywordsInAnyCase() throws Exception {
         Sweep sweep = read("[VERSION] 2.0\n[number of ports] 1\n[Matrix Format] full\n[Number Of Frequencies] 1\n"
                 + "[NETWORK DATA]\n1 0.5 0\n[end]\n", 1);
