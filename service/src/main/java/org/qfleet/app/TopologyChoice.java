@@ -25,6 +25,7 @@ final class TopologyChoice {
         return sweep.withTopology(fromTraces(sweep));
     }
 
+    /** The default for sources that do not say; the same rule as the sweep readers' default. */
     static Topology fromTraces(Sweep sweep) {
         return sweep.has(SParameter.S11) && !sweep.has(SParameter.S21) ? Topology.REFLECTION : Topology.TRANSMISSION;
     }

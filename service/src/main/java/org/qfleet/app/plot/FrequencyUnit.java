@@ -1,7 +1,7 @@
 package org.qfleet.app.plot;
 
 /** The unit a frequency axis is labelled in: the largest one that keeps tick labels short. */
-public enum FrequencyUnit {
+enum FrequencyUnit {
     GHZ("GHz", 1e9),
     MHZ("MHz", 1e6),
     KHZ("kHz", 1e3),

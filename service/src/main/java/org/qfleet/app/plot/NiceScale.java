@@ -11,7 +11,7 @@ import java.util.Locale;
  * @param max  upper end of the axis
  * @param step distance between ticks
  */
-public record NiceScale(double min, double max, double step) {
+record NiceScale(double min, double max, double step) {
 
     /** An axis from the tick at or below {@code lo} to the tick at or above {@code hi}, about {@code maxTicks} ticks. */
     public static NiceScale covering(double lo, double hi, int maxTicks) {
