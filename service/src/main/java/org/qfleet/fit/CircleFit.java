@@ -12,9 +12,10 @@ package org.qfleet.fit;
  * @param tilt         whether a magnitude slope was fitted (the last parameter)
  * @param sigma        residual standard deviation per real component
  * @param points       number of complex points fitted
+ * @param residualPower |data - model|^2 at each point
  */
 record CircleFit(double[] parameters, double[][] covariance, double referenceHz, double scaleHz,
-                 boolean background, boolean tilt, double sigma, int points) {
+                 boolean background, boolean tilt, double sigma, int points, double[] residualPower) {
 
     CircleModel model() {
         return model(parameters);

@@ -3,22 +3,27 @@ package org.qfleet.fit;
 import org.qfleet.sweep.Topology;
 
 /**
- * Fits the resonance circle with delay and complex background to complex data by weighted least
- * squares (equal noise on every point), started from model-free estimates: f0 and the width from the
+ * Fits the resonance circle with delay and complex background to complex data by least squares
+ * with equal noise on every point, started from model-free estimates: f0 and the width from the
  * speed along the trace |dS/df|, which peaks at f0 with a half-power full width of f0 / QL whatever
  * the background; the delay from the phase slope once the resonance's own slope is accounted for.
- * The covariance sigma^2 (J^T J)^-1 gives the asymptotic uncertainties (Coakley et al., IEEE Trans.
- * MTT 51(3), 862, 2003).
+ * Long sweeps are first solved on every k-th point, then polished on all of them. The covariance
+ * sigma^2 (J^T J)^-1 gives the asymptotic uncertainties (Coakley et al., IEEE Trans. MTT 51(3),
+ * 862, 2003).
  */
 final class ComplexCircleEstimator {
 
     /** chi-square(2) at 0.999: a background is kept only when it lowers the cost by more than this many sigma^2. */
     private static final double BACKGROUND_SIGNIFICANCE = 13.8;
+    /** Points kept for the coarse solution of a long sweep. */
+    private static final int COARSE_POINTS = 100;
+    /** Coarse points per half width the resonance must keep. */
+    private static final double COARSE_POINTS_PER_HALF_WIDTH = 6;
 
     /**
-     * @param backgroundPolicy transmission fits try without a background first (leakage is normally
-     *                         negligible and a free background makes the delay ill-determined);
-     *                         notches and reflections always need one
+     * Transmission fits try without a background first (leakage is normally negligible, and a free
+     * background makes the delay ill-determined) and keep one only when the data demand it; notches
+     * and reflections always have one, and a magnitude tilt besides.
      */
     CircleFit fit(double[] frequencyHz, double[] re, double[] im, Topology topology) throws FitException {
         int n = frequencyHz.length;
@@ -32,29 +37,85 @@ final class ComplexCircleEstimator {
         double x0 = peak[0];
         double g = peak[1];
         double t = StartingPoint.delay(x, re, im, x0, g);
-        t = StartingPoint.refineDelay(x, re, im, x0, g, t, topology != Topology.TRANSMISSION);
 
-        CircleFit best;
-        if (topology == Topology.TRANSMISSION) {
-            double[] a = StartingPoint.linearAmplitudes(x, re, im, x0, g, t, false);
-            CircleProblem plain = new CircleProblem(x, re, im, false, false);
-            LevenbergMarquardt.Solution s5 = LevenbergMarquardt.solve(plain, new double[] {a[2], a[3], x0, g, t});
-            CircleProblem withBackground = new CircleProblem(x, re, im, true, false);
-            double[] p5 = s5.p();
-            LevenbergMarquardt.Solution s7 = LevenbergMarquardt.solve(withBackground,
-                    new double[] {0, 0, p5[0], p5[1], p5[2], p5[3], p5[4]});
-            double sigma2 = s7.cost() / Math.max(1, 2 * n - 7);
-            boolean keepBackground = s5.cost() - s7.cost() > BACKGROUND_SIGNIFICANCE * sigma2;
-            best = keepBackground ? toFit(s7, withBackground, n, referenceHz, scaleHz)
-                    : toFit(s5, plain, n, referenceHz, scaleHz);
-        } else {
-            double[] a = StartingPoint.linearAmplitudes(x, re, im, x0, g, t, true);
-            CircleProblem problem = new CircleProblem(x, re, im, true, true);
-            LevenbergMarquardt.Solution s = LevenbergMarquardt.solve(problem,
-                    new double[] {a[0], a[1], a[2], a[3], x0, g, t, 0});
-            best = toFit(s, problem, n, referenceHz, scaleHz);
+        int stride = stride(n, g / (2.0 / (n - 1)));
+        double[] xs = every(x, stride);
+        double[] rs = every(re, stride);
+        double[] is = every(im, stride);
+        boolean transmission = topology == Topology.TRANSMISSION;
+        t = StartingPoint.refineDelay(xs, rs, is, x0, g, t, !transmission);
+        double[] a = StartingPoint.linearAmplitudes(xs, rs, is, x0, g, t, !transmission);
+
+        if (!transmission) {
+            double[] start = {a[0], a[1], a[2], a[3], x0, g, t, 0};
+            return solve(new CircleProblem(x, re, im, true, true), coarse(new CircleProblem(xs, rs, is, true, true), start, stride),
+                    n, referenceHz, scaleHz);
         }
-        return best;
+        CircleProblem plain = new CircleProblem(x, re, im, false, false);
+        double[] start = coarse(new CircleProblem(xs, rs, is, false, false), new double[] {a[2], a[3], x0, g, t}, stride);
+        LevenbergMarquardt.Solution s5 = LevenbergMarquardt.solve(plain, start);
+        double[] p5 = s5.p();
+        CircleProblem withBackground = new CircleProblem(x, re, im, true, false);
+        double[] p7 = {0, 0, p5[0], p5[1], p5[2], p5[3], p5[4]};
+        if (backgroundScore(plain, p5) > BACKGROUND_SIGNIFICANCE * s5.cost() / Math.max(1, 2 * n - 7)) {
+            LevenbergMarquardt.Solution s7 = LevenbergMarquardt.solve(withBackground, p7);
+            double sigma2 = s7.cost() / Math.max(1, 2 * n - 7);
+            if (s5.cost() - s7.cost() > BACKGROUND_SIGNIFICANCE * sigma2) {
+                return toFit(s7, withBackground, n, referenceHz, scaleHz);
+            }
+        }
+        return toFit(s5, plain, n, referenceHz, scaleHz);
+    }
+
+    /** Every k-th sample, so the coarse solution sees about {@link #COARSE_POINTS} points across the line. */
+    private static int stride(int n, double pointsPerHalfWidth) {
+        int byCount = n / COARSE_POINTS;
+        int byWidth = (int) (pointsPerHalfWidth / COARSE_POINTS_PER_HALF_WIDTH);
+        return Math.max(1, Math.min(byCount, byWidth));
+    }
+
+    private static double[] every(double[] v, int stride) {
+        if (stride == 1) {
+            return v;
+        }
+        double[] out = new double[(v.length + stride - 1) / stride];
+        for (int i = 0, j = 0; i < v.length; i += stride, j++) {
+            out[j] = v[i];
+        }
+        return out;
+    }
+
+    private static double[] coarse(CircleProblem problem, double[] start, int stride) {
+        return stride == 1 ? start : LevenbergMarquardt.solve(problem, start).p();
+    }
+
+    private static CircleFit solve(CircleProblem problem, double[] start, int n, double referenceHz, double scaleHz)
+            throws FitException {
+        return toFit(LevenbergMarquardt.solve(problem, start), problem, n, referenceHz, scaleHz);
+    }
+
+    /**
+     * The cost reduction one Gauss-Newton step of the model with a background would bring from the
+     * background-free solution: the score test of the background, from the same pass over the data.
+     */
+    private static double backgroundScore(CircleProblem plain, double[] p5) {
+        int k = 7;
+        double[][] jtj = new double[k][k];
+        double[] jtr = new double[k];
+        plain.plainWithBackgroundScore(p5, new double[5][5], new double[5], jtj, jtr);
+        for (int i = 0; i < k; i++) {
+            // A whisper of damping keeps the near-degenerate directions (background against delay) solvable.
+            jtj[i][i] *= 1 + 1e-9;
+        }
+        double[] step = new double[k];
+        if (!Linear.solveSymmetric(jtj, jtr, step)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double drop = 0;
+        for (int i = 0; i < k; i++) {
+            drop += jtr[i] * step[i];
+        }
+        return drop;
     }
 
     private static CircleFit toFit(LevenbergMarquardt.Solution s, CircleProblem problem, int n,
@@ -75,6 +136,7 @@ final class ComplexCircleEstimator {
         if (!(Math.abs(p[o + 3]) > 0) || !Double.isFinite(p[o + 3])) {
             throw new FitException("no resonance found: the fitted width is zero or not finite");
         }
-        return new CircleFit(p, inverse, referenceHz, scaleHz, problem.background(), problem.tilt(), Math.sqrt(sigma2), n);
+        return new CircleFit(p, inverse, referenceHz, scaleHz, problem.background(), problem.tilt(),
+                Math.sqrt(sigma2), n, problem.residualPower(p));
     }
 }

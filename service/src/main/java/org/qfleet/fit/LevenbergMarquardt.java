@@ -2,8 +2,11 @@ package org.qfleet.fit;
 
 /**
  * A compact Levenberg-Marquardt solver for problems with a handful of parameters (Marquardt's
- * scaled damping, Numerical Recipes ch. 15.5 style). Returns the solution and the undamped
- * J^T J there, from which the covariance follows.
+ * scaled damping, as in Numerical Recipes ch. 15.5). Every trial point is evaluated with its normal
+ * equations in one pass, so an accepted step costs a single pass over the data. The iteration stops
+ * when a step lowers the cost by less than 1e-4 of the residual variance, that is when the
+ * parameters move by about a hundredth of their own standard deviation; the next step of a
+ * converging Gauss-Newton iteration is smaller still by orders of magnitude.
  */
 final class LevenbergMarquardt {
 
@@ -12,77 +15,73 @@ final class LevenbergMarquardt {
     }
 
     private static final int MAX_ITERATIONS = 100;
-    private static final double RELATIVE_TOLERANCE = 1e-12;
+    private static final double VARIANCE_FRACTION = 1e-4;
+    private static final double MAX_LAMBDA = 1e12;
 
     private LevenbergMarquardt() {
     }
 
     static Solution solve(LeastSquaresProblem problem, double[] start) {
         int n = problem.parameterCount();
+        int dof = Math.max(1, problem.residualCount() - n);
         double[] p = start.clone();
         double[][] jtj = new double[n][n];
         double[] jtr = new double[n];
+        double[][] trialJtj = new double[n][n];
+        double[] trialJtr = new double[n];
         double[][] damped = new double[n][n];
         double[] step = new double[n];
         double[] trial = new double[n];
         double cost = problem.normalEquations(p, jtj, jtr);
         double lambda = 1e-3;
-        boolean converged = false;
         int iteration = 0;
+        boolean converged = false;
         while (iteration < MAX_ITERATIONS && !converged) {
             iteration++;
-            boolean improved = false;
-            while (!improved) {
-                for (int i = 0; i < n; i++) {
-                    for (int j = i; j < n; j++) {
-                        damped[i][j] = jtj[i][j];
-                    }
-                    damped[i][i] = jtj[i][i] * (1 + lambda) + 1e-300;
+            for (int i = 0; i < n; i++) {
+                System.arraycopy(jtj[i], i, damped[i], i, n - i);
+                damped[i][i] = jtj[i][i] * (1 + lambda) + 1e-300;
+            }
+            if (!Linear.solveSymmetric(damped, jtr, step)) {
+                lambda *= 10;
+                if (lambda > MAX_LAMBDA) {
+                    break;
                 }
-                if (!Linear.solveSymmetric(damped, jtr, step)) {
-                    lambda *= 10;
-                    if (lambda > 1e12) {
-                        return finish(problem, p, cost, iteration, false);
-                    }
-                    continue;
-                }
-                for (int i = 0; i < n; i++) {
-                    trial[i] = p[i] + step[i];
-                }
-                double trialCost = problem.cost(trial);
-                if (trialCost <= cost) {
-                    double drop = cost - trialCost;
-                    System.arraycopy(trial, 0, p, 0, n);
-                    cost = problem.normalEquations(p, jtj, jtr);
-                    lambda = Math.max(lambda / 10, 1e-12);
-                    improved = true;
-                    converged = drop <= RELATIVE_TOLERANCE * cost || smallStep(step, p);
-                } else {
-                    lambda *= 10;
-                    if (lambda > 1e12) {
-                        return finish(problem, p, cost, iteration, true);
-                    }
-                }
+                continue;
+            }
+            double predicted = 0;
+            for (int i = 0; i < n; i++) {
+                trial[i] = p[i] + step[i];
+                predicted += step[i] * jtr[i];
+            }
+            if (predicted <= VARIANCE_FRACTION * cost / dof) {
+                // Even the full step would gain next to nothing (the Gauss-Newton model predicts
+                // about twice the actual drop near a minimum): stop without evaluating it.
+                converged = true;
+                break;
+            }
+            double trialCost = problem.normalEquations(trial, trialJtj, trialJtr);
+            if (trialCost <= cost) {
+                double drop = cost - trialCost;
+                double[] swapP = p;
+                p = trial;
+                trial = swapP;
+                double[][] swapJtj = jtj;
+                jtj = trialJtj;
+                trialJtj = swapJtj;
+                double[] swapJtr = jtr;
+                jtr = trialJtr;
+                trialJtr = swapJtr;
+                cost = trialCost;
+                lambda = Math.max(lambda / 10, 1e-12);
+                converged = drop <= VARIANCE_FRACTION * cost / dof;
+            } else {
+                lambda *= 10;
+                // No downhill step left at any damping: the current point is the minimum to working precision.
+                converged = lambda > MAX_LAMBDA;
             }
         }
-        return finish(problem, p, cost, iteration, converged);
-    }
-
-    private static boolean smallStep(double[] step, double[] p) {
-        for (int i = 0; i < step.length; i++) {
-            if (Math.abs(step[i]) > 1e-10 * (Math.abs(p[i]) + 1e-10)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    private static Solution finish(LeastSquaresProblem problem, double[] p, double cost, int iterations, boolean converged) {
-        int n = p.length;
-        double[][] jtj = new double[n][n];
-        double[] jtr = new double[n];
-        double finalCost = problem.normalEquations(p, jtj, jtr);
         Linear.mirrorUpper(jtj);
-        return new Solution(p, finalCost, jtj, iterations, converged || finalCost <= cost);
+        return new Solution(p, cost, jtj, iteration, converged);
     }
 }

@@ -1,7 +1,5 @@
 package org.qfleet.fit;
 
-import java.util.Arrays;
-
 /**
  * The noise of a trace estimated from the data alone, without a model: second differences of a
  * smooth response nearly vanish, those of white noise have variance 6 sigma^2 per component. The
@@ -44,8 +42,6 @@ final class NoiseEstimate {
     }
 
     private static double median(double[] w) {
-        Arrays.sort(w);
-        int m = w.length;
-        return (m % 2 == 1) ? w[m / 2] : 0.5 * (w[m / 2 - 1] + w[m / 2]);
+        return Select.median(w, w.length);
     }
 }

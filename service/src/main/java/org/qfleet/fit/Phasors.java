@@ -35,20 +35,33 @@ final class Phasors {
             return;
         }
         double step = (x[n - 1] - x[0]) / (n - 1);
-        double rc = Math.cos(t * step);
-        double rs = -Math.sin(t * step);
-        double c = Math.cos(t * x[0]);
-        double s = -Math.sin(t * x[0]);
-        for (int i = 0; i < n; i++) {
+        // Two interleaved rotations by twice the step halve the chain of dependent multiplications;
+        // both restart from the library functions every 64 points so rounding cannot accumulate.
+        double rc = Math.cos(2 * t * step);
+        double rs = -Math.sin(2 * t * step);
+        double ca = 0;
+        double sa = 0;
+        double cb = 0;
+        double sb = 0;
+        for (int i = 0; i < n; i += 2) {
             if ((i & 63) == 0) {
-                c = Math.cos(t * (x[0] + i * step));
-                s = -Math.sin(t * (x[0] + i * step));
+                ca = Math.cos(t * (x[0] + i * step));
+                sa = -Math.sin(t * (x[0] + i * step));
+                cb = Math.cos(t * (x[0] + (i + 1) * step));
+                sb = -Math.sin(t * (x[0] + (i + 1) * step));
             }
-            cos[i] = c;
-            sin[i] = s;
-            double nc = c * rc - s * rs;
-            s = c * rs + s * rc;
-            c = nc;
+            cos[i] = ca;
+            sin[i] = sa;
+            if (i + 1 < n) {
+                cos[i + 1] = cb;
+                sin[i + 1] = sb;
+            }
+            double na = ca * rc - sa * rs;
+            sa = ca * rs + sa * rc;
+            ca = na;
+            double nb = cb * rc - sb * rs;
+            sb = cb * rs + sb * rc;
+            cb = nb;
         }
     }
 }

@@ -1,7 +1,5 @@
 package org.qfleet.fit;
 
-import java.util.Arrays;
-
 /**
  * Model-free starting values for the circle fit, on normalized frequency x. Each step is cheap and
  * only has to land the optimizer in the right valley.
@@ -44,9 +42,7 @@ final class StartingPoint {
                 k = i;
             }
         }
-        double[] sorted = s.clone();
-        Arrays.sort(sorted);
-        double pedestal = sorted[n / 2];
+        double pedestal = Select.median(s.clone(), n);
         double half = pedestal + 0.5 * (s[k] - pedestal);
         double left = crossing(x, s, k, -1, half);
         double right = crossing(x, s, k, +1, half);
@@ -78,7 +74,9 @@ final class StartingPoint {
     private static double[] differences(double[] re, double[] im, int m) {
         double[] d = new double[re.length];
         for (int i = m; i < re.length - m; i++) {
-            d[i] = Math.hypot(re[i + m] - re[i - m], im[i + m] - im[i - m]);
+            double a = re[i + m] - re[i - m];
+            double b = im[i + m] - im[i - m];
+            d[i] = Math.sqrt(a * a + b * b);
         }
         return d;
     }
@@ -130,10 +128,10 @@ final class StartingPoint {
             double cr = re[i + 1] * re[i] + im[i + 1] * im[i];
             double ci = im[i + 1] * re[i] - re[i + 1] * im[i];
             double dx = x[i + 1] - x[i];
-            double slope = Math.atan2(ci, cr) / dx;
+            double slope = Angles.atan2(ci, cr) / dx;
             double xm = 0.5 * (x[i] + x[i + 1]) - x0;
             double h = g / (g * g + xm * xm);
-            double w = Math.hypot(cr, ci) * dx * dx;
+            double w = Math.sqrt(cr * cr + ci * ci) * dx * dx;
             sw += w;
             swh += w * h;
             swhh += w * h * h;
@@ -148,50 +146,86 @@ final class StartingPoint {
         return -intercept;
     }
 
-    /** Picks the delay with the smallest residual on a grid around the estimate, then refines it by a parabola. */
+    /**
+     * Picks the delay with the smallest residual on a grid around the estimate, then refines it by
+     * a parabola. For fixed position, width and delay the best A and B follow by linear least squares,
+     * so each grid point costs one pass over the data (variable projection, Golub and Pereyra 1973).
+     */
     static double refineDelay(double[] x, double[] re, double[] im, double x0, double g, double t, boolean background) {
-        double step = 0.4;
-        int half = 8;
-        boolean uniform = Phasors.equallySpaced(x);
-        double[] cos = new double[x.length];
-        double[] sin = new double[x.length];
-        double[] cost = new double[2 * half + 1];
-        int best = 0;
-        for (int k = -half; k <= half; k++) {
-            Phasors.fill(t + k * step, x, uniform, cos, sin);
-            cost[k + half] = residual(x, re, im, x0, g, cos, sin, background);
-            if (cost[k + half] < cost[best]) {
-                best = k + half;
-            }
-        }
-        double tBest = t + (best - half) * step;
-        if (best > 0 && best < cost.length - 1) {
-            double denom = cost[best - 1] - 2 * cost[best] + cost[best + 1];
-            if (denom > 0) {
-                tBest += 0.5 * step * (cost[best - 1] - cost[best + 1]) / denom;
-            }
-        }
-        return tBest;
-    }
-
-    private static double residual(double[] x, double[] re, double[] im, double x0, double g,
-                                   double[] cos, double[] sin, boolean background) {
-        double[] a = linearAmplitudes(x, re, im, x0, g, cos, sin, background);
-        double cost = 0;
-        for (int i = 0; i < x.length; i++) {
-            double c = cos[i];
-            double s = sin[i];
-            double wr = c * re[i] + s * im[i];
-            double wi = c * im[i] - s * re[i];
+        int n = x.length;
+        double[] lr = new double[n];
+        double[] li = new double[n];
+        double s1r = 0;
+        double s1i = 0;
+        double s2 = 0;
+        double energy = 0;
+        for (int i = 0; i < n; i++) {
             double u = x[i] - x0;
             double d = 1 / (g * g + u * u);
-            double lr = g * g * d;
-            double li = -g * u * d;
-            double rr = wr - a[0] - (a[2] * lr - a[3] * li);
-            double ri = wi - a[1] - (a[2] * li + a[3] * lr);
-            cost += rr * rr + ri * ri;
+            lr[i] = g * g * d;
+            li[i] = -g * u * d;
+            s1r += lr[i];
+            s1i += li[i];
+            s2 += lr[i] * lr[i] + li[i] * li[i];
+            energy += re[i] * re[i] + im[i] * im[i];
         }
-        return cost;
+        ProjectedCost projected = new ProjectedCost(x, re, im, lr, li, s1r, s1i, s2, energy, background);
+        // A coarse grid of twists 0.8 rad apart over the half span, then the neighbours of the best
+        // at half that step, and a parabola through the three.
+        double step = 0.8;
+        int half = 4;
+        double best = t;
+        double bestCost = Double.POSITIVE_INFINITY;
+        for (int k = -half; k <= half; k++) {
+            double c = projected.at(t + k * step);
+            if (c < bestCost) {
+                bestCost = c;
+                best = t + k * step;
+            }
+        }
+        double fine = step / 2;
+        double below = projected.at(best - fine);
+        double above = projected.at(best + fine);
+        double denom = below - 2 * bestCost + above;
+        if (denom > 0) {
+            double shift = 0.5 * fine * (below - above) / denom;
+            return best + Math.max(-fine, Math.min(fine, shift));
+        }
+        return below < above ? best - fine : best + fine;
+    }
+
+    /** The least-squares cost left after the best A (and B) for a given delay, one pass per delay. */
+    private record ProjectedCost(double[] x, double[] re, double[] im, double[] lr, double[] li,
+                                 double s1r, double s1i, double s2, double energy, boolean background) {
+
+        double at(double t) {
+            int n = x.length;
+            double y0r = 0;
+            double y0i = 0;
+            double y1r = 0;
+            double y1i = 0;
+            double[] cos = new double[n];
+            double[] sin = new double[n];
+            Phasors.fill(t, x, Phasors.equallySpaced(x), cos, sin);
+            for (int i = 0; i < n; i++) {
+                double wr = cos[i] * re[i] + sin[i] * im[i];
+                double wi = cos[i] * im[i] - sin[i] * re[i];
+                y0r += wr;
+                y0i += wi;
+                y1r += lr[i] * wr + li[i] * wi;
+                y1i += lr[i] * wi - li[i] * wr;
+            }
+            double explained;
+            if (background) {
+                // [Y0 Y1]^H G^-1 [Y0 Y1] with G = [[n, S1], [conj S1, S2]].
+                double det = n * s2 - (s1r * s1r + s1i * s1i);
+                double cross = s1r * (y0r * y1r + y0i * y1i) + s1i * (y0r * y1i - y0i * y1r);
+                explained = (s2 * (y0r * y0r + y0i * y0i) + n * (y1r * y1r + y1i * y1i) - 2 * cross) / det;
+            } else {
+                explained = (y1r * y1r + y1i * y1i) / s2;
+            }
+            return energy - explained;
+        }
     }
 
     static double[] linearAmplitudes(double[] x, double[] re, double[] im, double x0, double g, double t, boolean background) {
