@@ -19,6 +19,9 @@ final class CircleProblem implements LeastSquaresProblem {
     private final boolean equallySpaced;
     private final double[] cos;
     private final double[] sin;
+    private final double[][] scoreJtj = new double[7][7];
+    private final double[] scoreJtr = new double[7];
+    private final double[] scoredAt = new double[5];
 
     CircleProblem(double[] x, double[] zr, double[] zi, boolean background, boolean tilt) {
         this.x = x;
@@ -27,6 +30,7 @@ final class CircleProblem implements LeastSquaresProblem {
         this.background = background;
         this.tilt = tilt;
         this.equallySpaced = Phasors.equallySpaced(x);
+        java.util.Arrays.fill(scoredAt, Double.NaN);
         this.cos = new double[x.length];
         this.sin = new double[x.length];
     }
@@ -122,7 +126,23 @@ final class CircleProblem implements LeastSquaresProblem {
     }
 
     private double plainKernel(double[] p, double[][] jtj, double[] jtr) {
-        return plainWithBackgroundScore(p, jtj, jtr, null, null);
+        double cost = plainWithBackgroundScore(p, jtj, jtr, scoreJtj, scoreJtr);
+        System.arraycopy(p, 0, scoredAt, 0, 5);
+        return cost;
+    }
+
+    /**
+     * The normal equations of the model with a background at B = 0 and the other parameters at
+     * {@code p5}, reusing the last pass when it was made at the same point.
+     */
+    void backgroundScoreEquations(double[] p5, double[][] jtj7, double[] jtr7) {
+        if (!java.util.Arrays.equals(p5, 0, 5, scoredAt, 0, 5)) {
+            plainKernel(p5, new double[5][5], new double[5]);
+        }
+        for (int i = 0; i < 7; i++) {
+            System.arraycopy(scoreJtj[i], 0, jtj7[i], 0, 7);
+        }
+        System.arraycopy(scoreJtr, 0, jtr7, 0, 7);
     }
 
     /**

@@ -102,7 +102,7 @@ final class ComplexCircleEstimator {
         int k = 7;
         double[][] jtj = new double[k][k];
         double[] jtr = new double[k];
-        plain.plainWithBackgroundScore(p5, new double[5][5], new double[5], jtj, jtr);
+        plain.backgroundScoreEquations(p5, jtj, jtr);
         for (int i = 0; i < k; i++) {
             // A whisper of damping keeps the near-degenerate directions (background against delay) solvable.
             jtj[i][i] *= 1 + 1e-9;

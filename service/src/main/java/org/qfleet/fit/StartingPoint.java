@@ -195,8 +195,37 @@ final class StartingPoint {
     }
 
     /** The least-squares cost left after the best A (and B) for a given delay, one pass per delay. */
-    private record ProjectedCost(double[] x, double[] re, double[] im, double[] lr, double[] li,
-                                 double s1r, double s1i, double s2, double energy, boolean background) {
+    private static final class ProjectedCost {
+        private final double[] x;
+        private final double[] re;
+        private final double[] im;
+        private final double[] lr;
+        private final double[] li;
+        private final double s1r;
+        private final double s1i;
+        private final double s2;
+        private final double energy;
+        private final boolean background;
+        private final boolean uniform;
+        private final double[] cos;
+        private final double[] sin;
+
+        ProjectedCost(double[] x, double[] re, double[] im, double[] lr, double[] li,
+                      double s1r, double s1i, double s2, double energy, boolean background) {
+            this.x = x;
+            this.re = re;
+            this.im = im;
+            this.lr = lr;
+            this.li = li;
+            this.s1r = s1r;
+            this.s1i = s1i;
+            this.s2 = s2;
+            this.energy = energy;
+            this.background = background;
+            this.uniform = Phasors.equallySpaced(x);
+            this.cos = new double[x.length];
+            this.sin = new double[x.length];
+        }
 
         double at(double t) {
             int n = x.length;
@@ -204,9 +233,7 @@ final class StartingPoint {
             double y0i = 0;
             double y1r = 0;
             double y1i = 0;
-            double[] cos = new double[n];
-            double[] sin = new double[n];
-            Phasors.fill(t, x, Phasors.equallySpaced(x), cos, sin);
+            Phasors.fill(t, x, uniform, cos, sin);
             for (int i = 0; i < n; i++) {
                 double wr = cos[i] * re[i] + sin[i] * im[i];
                 double wi = cos[i] * im[i] - sin[i] * re[i];
