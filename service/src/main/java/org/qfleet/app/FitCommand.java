@@ -5,8 +5,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.qfleet.app.plot.PlotDirectory;
-import org.qfleet.fit.ResonanceAnalyzer;
-import org.qfleet.sweep.SweepFiles;
+import org.qfleet.fit.FitOptions;
 import org.qfleet.sweep.SweepLimits;
 import org.qfleet.sweep.Topology;
 import picocli.CommandLine.Command;
@@ -39,6 +38,12 @@ final class FitCommand implements Callable<Integer> {
                     + "Default: what the sweep says, else reflection for S11-only files, else transmission.")
     Topology topology;
 
+    @Option(names = "--method", paramLabel = "METHOD", converter = MethodConverter.class, defaultValue = MethodConverter.AUTO,
+            completionCandidates = MethodConverter.Names.class,
+            description = "Estimator of f0 and QL: ${COMPLETION-CANDIDATES}. Default: ${DEFAULT-VALUE}, "
+                    + "the complex-circle fit when the data carry phase, else the Lorentzian fit.")
+    FitOptions fitOptions;
+
     @Option(names = "--plot", paramLabel = "DIR",
             description = "Also write one SVG plot per sweep into DIR (created if needed).")
     Path plotDirectory;
@@ -58,11 +63,10 @@ final class FitCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        SweepFiles files = new SweepFiles(limits());
-        ResonanceAnalyzer analyzer = new ResonanceAnalyzer();
+        SweepLimits limits = limits();
         FitRunner.Settings settings = new FitRunner.Settings(topology, plots(), debug.enabled);
-        FitRunner runner = new FitRunner(files::read, analyzer::analyze, settings,
-                spec.commandLine().getOut(), spec.commandLine().getErr(), System::nanoTime);
+        FitRunner runner = FitRunner.forFiles(limits, fitOptions, settings,
+                spec.commandLine().getOut(), spec.commandLine().getErr(), FitListener.NONE);
         return runner.run(inputs) ? 0 : 1;
     }
 

@@ -8,10 +8,15 @@ import java.util.function.LongSupplier;
 import org.qfleet.app.InputFiles.Input;
 import org.qfleet.app.plot.PlotDirectory;
 import org.qfleet.fit.FitException;
+import org.qfleet.fit.FitOptions;
+import org.qfleet.fit.ResonanceAnalyzer;
 import org.qfleet.fit.ResonanceResult;
 import org.qfleet.sweep.InvalidSweepException;
 import org.qfleet.sweep.ReadOutcome;
 import org.qfleet.sweep.Sweep;
+import org.qfleet.sweep.SweepFiles;
+import org.qfleet.sweep.SweepLimits;
+import org.qfleet.sweep.SweepValidator;
 import org.qfleet.sweep.Topology;
 
 /**
@@ -34,16 +39,32 @@ final class FitRunner {
     private final PrintWriter out;
     private final PrintWriter err;
     private final LongSupplier nanoClock;
+    private final FitListener listener;
     private final ResultJson json = new ResultJson();
 
     FitRunner(SweepSource source, SweepFitter fitter, Settings settings, PrintWriter out, PrintWriter err,
             LongSupplier nanoClock) {
+        this(source, fitter, settings, out, err, nanoClock, FitListener.NONE);
+    }
+
+    FitRunner(SweepSource source, SweepFitter fitter, Settings settings, PrintWriter out, PrintWriter err,
+            LongSupplier nanoClock, FitListener listener) {
         this.source = source;
         this.fitter = fitter;
         this.settings = settings;
         this.out = out;
         this.err = err;
         this.nanoClock = nanoClock;
+        this.listener = listener;
+    }
+
+    /** The runner for files on disk, read within {@code limits} and fitted with {@code options}. */
+    static FitRunner forFiles(SweepLimits limits, FitOptions options, Settings settings, PrintWriter out,
+            PrintWriter err, FitListener listener) {
+        SweepFiles files = new SweepFiles(limits);
+        ResonanceAnalyzer analyzer = new ResonanceAnalyzer();
+        return new FitRunner(files::read, sweep -> analyzer.analyze(sweep, options), settings, out, err,
+                System::nanoTime, listener);
     }
 
     /** Processes every argument (files and folders); true when every input gave a result. */
@@ -90,13 +111,17 @@ final class FitRunner {
         Sweep sweep = TopologyChoice.apply(outcome.sweep(), settings.topology());
         ResonanceResult result;
         try {
+            SweepValidator.validateTopology(sweep);
             result = fitter.fit(sweep);
+        } catch (InvalidSweepException e) {
+            return error(sweep.source(), e.getMessage(), e.error().code());
         } catch (FitException e) {
             return error(sweep.source(), e.getMessage(), ErrorCodes.FIT_FAILED);
         } catch (RuntimeException e) {
             return unexpected(sweep.source(), e);
         }
         printLine(json.resultLine(sweep, result));
+        listener.fitted(sweep, result);
         return settings.plots() == null || plot(sweep, result);
     }
 
@@ -115,6 +140,7 @@ final class FitRunner {
 
     private boolean error(String source, String reason, String code) {
         printLine(json.errorLine(source, reason, code));
+        listener.failed(source, code);
         return false;
     }
 

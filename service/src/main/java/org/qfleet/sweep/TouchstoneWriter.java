@@ -40,7 +40,7 @@ public final class TouchstoneWriter {
     /** Writes the sweep; the writer is flushed, not closed. */
     public void write(Sweep sweep, Writer out) throws IOException {
         SParameter[] order = ports(sweep) == 1 ? ONE_PORT : TWO_PORT;
-        out.write("! " + order.length + "-port S-parameters, " + sweep.size() + " frequencies\n");
+        out.write("! " + ports(sweep) + "-port S-parameters, " + sweep.size() + " frequencies\n");
         out.write("# " + unit.symbol() + " S " + format.name() + " R " + sweep.referenceOhms() + "\n");
         StringBuilder line = new StringBuilder(256);
         double[] frequencies = sweep.frequencyHz();

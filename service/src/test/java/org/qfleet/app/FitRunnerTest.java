@@ -167,13 +167,11 @@ class FitRunnerTest {
         SweepSource source = file -> {
             String name = file.getFileName().toString();
             Sweep sweep = ResonanceFixtures.fileSweep(name, CAVITY);
-            if (name.equals("given.json")) {
-                sweep = sweep.withTopology(Topology.NOTCH);
-            } else if (name.equals("oneport.s1p")) {
-                Trace s21 = sweep.traces().get(SParameter.S21);
-                sweep = new Sweep(name, SweepInfo.NONE, null, sweep.frequencyHz(), Map.of(SParameter.S11, s21), 50);
-            }
-            return List.of(ReadOutcome.of(sweep));
+            Trace trace = sweep.traces().get(SParameter.S21);
+            Map<SParameter, Trace> traces = name.equals("oneport.s1p") ? Map.of(SParameter.S11, trace)
+                    : Map.of(SParameter.S21, trace, SParameter.S11, trace);
+            Topology own = name.equals("given.json") ? Topology.NOTCH : null;
+            return List.of(ReadOutcome.of(new Sweep(name, SweepInfo.NONE, own, sweep.frequencyHz(), traces, 50)));
         };
 
         runner(source, fixedResult, settings(null)).run(files);
@@ -185,6 +183,22 @@ class FitRunnerTest {
         assertThat(sweepsFitted).extracting(Sweep::topology).containsOnly(Topology.REFLECTION);
         assertThat(stdoutLines()).extracting(l -> l.get("topology").asText())
                 .containsExactly("notch", "transmission", "reflection", "reflection", "reflection", "reflection");
+    }
+
+    @Test
+    void aTopologyTheSweepCannotServeIsAnErrorLineAndNotFitted() throws Exception {
+        List<Path> files = touch("oneport.s1p");
+        SweepSource s11Only = file -> {
+            Sweep sweep = ResonanceFixtures.fileSweep("oneport.s1p", CAVITY);
+            Map<SParameter, Trace> traces = Map.of(SParameter.S11, sweep.traces().get(SParameter.S21));
+            return List.of(ReadOutcome.of(new Sweep("oneport.s1p", SweepInfo.NONE, null, sweep.frequencyHz(), traces, 50)));
+        };
+
+        boolean ok = runner(s11Only, fixedResult, settings(Topology.NOTCH)).run(files);
+
+        assertThat(ok).isFalse();
+        assertThat(sweepsFitted).isEmpty();
+        assertThat(stdoutLines().get(0).get("code").asText()).isEqualTo(SweepError.TOPOLOGY_MISMATCH.code());
     }
 
     @Test

@@ -27,10 +27,13 @@ class MainTest {
         assertThat(out.toString()).startsWith("qfleet ");
 
         assertThat(run("--help")).isZero();
-        assertThat(out.toString()).contains("fit");
+        assertThat(out.toString()).contains("fit", "demo");
 
         assertThat(run("fit", "--help")).isZero();
-        assertThat(out.toString()).contains("--topology", "--plot", "--max-points", "--debug");
+        assertThat(out.toString()).contains("--topology", "--method", "--plot", "--max-points", "--debug");
+
+        assertThat(run("demo", "--help")).isZero();
+        assertThat(out.toString()).contains("--count", "--seed", "--out");
     }
 
     @Test

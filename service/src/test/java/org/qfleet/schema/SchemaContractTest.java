@@ -7,14 +7,8 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.networknt.schema.JsonSchema;
-import com.networknt.schema.JsonSchemaFactory;
-import com.networknt.schema.SchemaValidatorsConfig;
-import com.networknt.schema.SpecVersion;
 import com.networknt.schema.ValidationMessage;
 import java.io.IOException;
-import java.io.InputStream;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashSet;
@@ -229,24 +223,15 @@ class SchemaContractTest {
     }
 
     private static Set<ValidationMessage> errors(JsonSchema schema, String json) throws IOException {
-        return schema.validate(MAPPER.readTree(json));
+        return Schemas.errors(schema, json);
     }
 
     private static JsonSchema load(String name) throws IOException {
-        JsonSchemaFactory factory = JsonSchemaFactory.getInstance(SpecVersion.VersionFlag.V202012);
-        SchemaValidatorsConfig config = SchemaValidatorsConfig.builder().formatAssertionsEnabled(true).build();
-        try (InputStream in = Files.newInputStream(schemaFolder().resolve(name))) {
-            return factory.getSchema(in, config);
-        }
+        return Schemas.load(name);
     }
 
     private static JsonNode schemaJson(String name) throws IOException {
-        return MAPPER.readTree(schemaFolder().resolve(name).toFile());
-    }
-
-    /** Set by the build (see the surefire configuration); a run from the module folder falls back to ../schemas. */
-    private static Path schemaFolder() {
-        return Path.of(System.getProperty("qfleet.schemas", "../schemas"));
+        return Schemas.json(name);
     }
 
     private static List<String> strings(JsonNode array) {

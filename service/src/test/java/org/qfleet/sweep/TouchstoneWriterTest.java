@@ -51,7 +51,7 @@ class TouchstoneWriterTest {
 
         assertThat(TouchstoneWriter.extension(original)).isEqualTo(".s1p");
         String text = writer.toText(original);
-        assertThat(text).contains("# GHz S MA R 50.0\n");
+        assertThat(text).contains("# GHz S MA R 50.0\n").startsWith("! 1-port");
         Sweep copy = reader.read("copy.s1p", new StringReader(text), 1);
         assertThat(copy.traces()).containsOnlyKeys(SParameter.S11);
         assertClose(copy.trace(SParameter.S11).orElseThrow(), original.trace(SParameter.S11).orElseThrow(), 1e-14);
@@ -61,6 +61,8 @@ class TouchstoneWriterTest {
     void writesAbsentParametersOfATwoPortFileAsZero() throws Exception {
         Sweep original = randomSweep(new Random(4), 11, SParameter.S21);
         assertThat(TouchstoneWriter.extension(original)).isEqualTo(".s2p");
+        assertThat(new TouchstoneWriter(FrequencyUnit.MHZ, TouchstoneFormat.RI).toText(original))
+                .as("the opening comment counts ports, not parameters").startsWith("! 2-port");
 
         Sweep ri = roundTrip(original, FrequencyUnit.MHZ, TouchstoneFormat.RI);
         assertThat(ri.trace(SParameter.S11).orElseThrow().re()).containsOnly(0.0);

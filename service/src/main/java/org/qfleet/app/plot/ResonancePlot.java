@@ -6,8 +6,9 @@ import org.qfleet.fit.ResonanceResult;
 import org.qfleet.sweep.Sweep;
 
 /**
- * Draws one fitted sweep as a self-contained SVG document: a title line with the source and the
- * main numbers, |S| in dB against frequency on the left, the complex plane on the right.
+ * Draws one fitted sweep as a self-contained SVG document: a title with the source on one line and
+ * the main numbers on the next (so a long path does not push them off the page), |S| in dB against
+ * frequency on the left, the complex plane on the right.
  * Hand-written SVG, no plotting library; stateless and thread-safe.
  */
 public final class ResonancePlot {
@@ -32,7 +33,7 @@ public final class ResonancePlot {
     /** The SVG document for one sweep and its result. */
     public String render(Sweep sweep, ResonanceResult result) {
         SvgBuilder svg = new SvgBuilder(WIDTH, HEIGHT, STYLE);
-        svg.textWithLead(20, 30, "title", sweep.source(), titleNumbers(result));
+        svg.textTwoLines(20, 26, 20, "title", sweep.source(), titleNumbers(result));
         MainTrace main = MainTrace.of(sweep);
         if (main == null || sweep.size() == 0) {
             svg.text(WIDTH / 2.0, HEIGHT / 2.0, "middle", "note", "the sweep holds no trace to draw");
@@ -46,11 +47,11 @@ public final class ResonancePlot {
         return svg.finish();
     }
 
-    /** f0, QL, Qu with their uncertainties, and the quality flags, to follow the source. */
+    /** f0, QL, Qu with their uncertainties, and the quality flags, for the line below the source. */
     static String titleNumbers(ResonanceResult r) {
         String flags = r.flags().isEmpty() ? "none"
                 : r.flags().stream().map(QualityFlag::code).collect(Collectors.joining(", "));
-        return SEPARATOR + "f0 = " + ValueFormat.frequency(r.f0Hz(), r.f0UncertaintyHz())
+        return "f0 = " + ValueFormat.frequency(r.f0Hz(), r.f0UncertaintyHz())
                 + SEPARATOR + "QL = " + ValueFormat.withUncertainty(r.qLoaded(), r.qLoadedUncertainty())
                 + SEPARATOR + "Qu = " + ValueFormat.withUncertainty(r.qUnloaded(), r.qUnloadedUncertainty())
                 + SEPARATOR + "flags: " + flags;

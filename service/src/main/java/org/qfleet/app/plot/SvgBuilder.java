@@ -84,12 +84,13 @@ final class SvgBuilder {
         return this;
     }
 
-    /** A line of text whose first part is set in bold (class {@code strong}). */
-    SvgBuilder textWithLead(double x, double y, String cssClass, String lead, String rest) {
+    /** Two lines of text, one element: {@code lead} in bold (class {@code strong}), {@code rest} below it. */
+    SvgBuilder textTwoLines(double x, double y, double lineHeight, String cssClass, String lead, String rest) {
         svg.append("<text class=\"").append(cssClass).append('"');
         attr("x", x).attr("y", y);
-        svg.append("><tspan class=\"strong\">").append(escape(lead)).append("</tspan>")
-                .append(escape(rest)).append("</text>\n");
+        svg.append("><tspan class=\"strong\">").append(escape(lead)).append("</tspan><tspan");
+        attr("x", x).attr("dy", lineHeight);
+        svg.append('>').append(escape(rest)).append("</tspan></text>\n");
         return this;
     }
 

@@ -50,6 +50,11 @@ class ResonancePlotTest {
         String title = elements(svg, "text", "title").get(0).getTextContent();
         assertThat(title).contains("cavity-17.s2p", "f0 = 10.4", "GHz", "QL = 5000", "Qu = ", "±",
                 "flags: low-snr, span-narrow");
+        NodeList lines = elements(svg, "text", "title").get(0).getElementsByTagName("tspan");
+        assertThat(lines.getLength()).as("source and numbers on lines of their own").isEqualTo(2);
+        assertThat(lines.item(0).getTextContent()).isEqualTo("cavity-17.s2p");
+        assertThat(Double.parseDouble(((Element) lines.item(1)).getAttribute("dy"))).isPositive();
+        assertThat(lines.item(1).getTextContent()).startsWith("f0 = ");
     }
 
     @Test
