@@ -162,11 +162,13 @@ final class StartingPoint {
         for (int i = 0; i < n; i++) {
             double u = x[i] - x0;
             double d = 1 / (g * g + u * u);
-            lr[i] = g * g * d;
-            li[i] = -g * u * d;
-            s1r += lr[i];
-            s1i += li[i];
-            s2 += lr[i] * lr[i] + li[i] * li[i];
+            double a = g * g * d;
+            double b = -g * u * d;
+            lr[i] = a;
+            li[i] = b;
+            s1r += a;
+            s1i += b;
+            s2 += a * a + b * b;
             energy += re[i] * re[i] + im[i] * im[i];
         }
         ProjectedCost projected = new ProjectedCost(x, re, im, lr, li, s1r, s1i, s2, energy, background);
