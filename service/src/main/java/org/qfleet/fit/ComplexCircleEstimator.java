@@ -122,14 +122,9 @@ final class ComplexCircleEstimator {
                                    double referenceHz, double scaleHz) throws FitException {
         int k = problem.parameterCount();
         double sigma2 = s.cost() / Math.max(1, 2 * n - k);
-        double[][] inverse = Linear.inverseSymmetric(s.jtj());
+        double[][] inverse = Covariance.of(s.jtj(), sigma2);
         if (inverse == null) {
             throw new FitException("the resonance circle is not determined by the data (singular fit)");
-        }
-        for (double[] row : inverse) {
-            for (int j = 0; j < k; j++) {
-                row[j] *= sigma2;
-            }
         }
         double[] p = s.p();
         int o = problem.background() ? 2 : 0;

@@ -91,7 +91,7 @@ final class HalfPowerEstimator {
                 double shift = 0.5 * (p[k - 1] - p[k + 1]) / denom;
                 if (Math.abs(shift) < 1) {
                     f0 = f[k] + shift * (shift > 0 ? f[k + 1] - f[k] : f[k] - f[k - 1]);
-                    extreme = p[k] - 0.25 * (p[k - 1] - p[k + 1]) * shift;
+                    extreme = Math.max(0, p[k] - 0.25 * (p[k - 1] - p[k + 1]) * shift);
                 }
             }
         }

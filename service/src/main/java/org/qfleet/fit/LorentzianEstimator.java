@@ -56,14 +56,9 @@ final class LorentzianEstimator {
         }
         int k = p.length;
         double sigma2 = solution.cost() / Math.max(1, n - k);
-        double[][] covariance = Linear.inverseSymmetric(solution.jtj());
+        double[][] covariance = Covariance.of(solution.jtj(), sigma2);
         if (covariance == null) {
             throw new FitException("the Lorentzian is not determined by the data (singular fit)");
-        }
-        for (double[] row : covariance) {
-            for (int j = 0; j < k; j++) {
-                row[j] *= sigma2;
-            }
         }
         if (!(Math.abs(p[background ? 4 : 2]) > 0)) {
             throw new FitException("no resonance found: the fitted width is zero");
