@@ -1,6 +1,7 @@
 package org.qfleet.fit;
 
 import org.qfleet.sweep.Topology;
+import org.qfleet.sweep.Trace;
 
 /**
  * Fits the resonance circle with delay and complex background to complex data by least squares
@@ -11,7 +12,7 @@ import org.qfleet.sweep.Topology;
  * sigma^2 (J^T J)^-1 gives the asymptotic uncertainties (Coakley et al., IEEE Trans. MTT 51(3),
  * 862, 2003).
  */
-final class ComplexCircleEstimator {
+final class ComplexCircleEstimator implements ResonanceEstimator {
 
     /** chi-square(2) at 0.999: a background is kept only when it lowers the cost by more than this many sigma^2. */
     private static final double BACKGROUND_SIGNIFICANCE = 13.8;
@@ -20,12 +21,27 @@ final class ComplexCircleEstimator {
     /** Coarse points per half width the resonance must keep. */
     private static final double COARSE_POINTS_PER_HALF_WIDTH = 6;
 
+    @Override
+    public Method method() {
+        return Method.COMPLEX_CIRCLE;
+    }
+
+    @Override
+    public TraceFit fit(double[] frequencyHz, Trace trace, Topology topology) throws FitException {
+        if (!trace.phaseKnown()) {
+            throw new FitException("the complex-circle fit needs phase, and this trace is magnitude only");
+        }
+        CircleFit fit = fitCircle(frequencyHz, trace.re(), trace.im(), topology);
+        return new TraceFit(fit.parameters(), fit.covariance(), p -> ResonanceShape.of(fit.model(p)), fit.model(),
+                Method.COMPLEX_CIRCLE, fit.sigma(), NoiseEstimate.complexSigma(trace.re(), trace.im()), fit.residualPower());
+    }
+
     /**
      * Transmission fits try without a background first (leakage is normally negligible, and a free
      * background makes the delay ill-determined) and keep one only when the data demand it; notches
      * and reflections always have one, and a magnitude tilt besides.
      */
-    CircleFit fit(double[] frequencyHz, double[] re, double[] im, Topology topology) throws FitException {
+    CircleFit fitCircle(double[] frequencyHz, double[] re, double[] im, Topology topology) throws FitException {
         int n = frequencyHz.length;
         double referenceHz = 0.5 * (frequencyHz[0] + frequencyHz[n - 1]);
         double scaleHz = 0.5 * (frequencyHz[n - 1] - frequencyHz[0]);

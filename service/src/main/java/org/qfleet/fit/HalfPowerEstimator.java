@@ -1,6 +1,7 @@
 package org.qfleet.fit;
 
 import org.qfleet.sweep.Topology;
+import org.qfleet.sweep.Trace;
 
 /**
  * The bench baseline: f0 at the extreme of |S|, QL = f0 / bandwidth between the half-power points
@@ -8,7 +9,7 @@ import org.qfleet.sweep.Topology;
  * reflection) it is (1 + |S(f0)|^2) / 2 relative to the off-resonance level, not "3 dB above the
  * minimum" (DESIGN.md section 4; standard resonator theory, e.g. Kajfez, Q Factor, 1994, from memory).
  */
-final class HalfPowerEstimator {
+final class HalfPowerEstimator implements ResonanceEstimator {
 
     /** Share of the points at each end that give the off-resonance level of a dip. */
     private static final double EDGE_SHARE = 0.05;
@@ -18,7 +19,14 @@ final class HalfPowerEstimator {
         return readWithBand(f, magnitude, topology).shape;
     }
 
-    TraceFit fit(double[] f, double[] magnitude, Topology topology) throws FitException {
+    @Override
+    public Method method() {
+        return Method.HALF_POWER;
+    }
+
+    @Override
+    public TraceFit fit(double[] f, Trace trace, Topology topology) throws FitException {
+        double[] magnitude = ResonanceEstimator.magnitude(trace);
         Reading r = readWithBand(f, magnitude, topology);
         ResonanceShape s = r.shape;
         double noise = NoiseEstimate.realSigma(magnitude);
@@ -39,8 +47,10 @@ final class HalfPowerEstimator {
         double cos = s.cosRotation();
         ResponseModel model = new CircleModel(s.f0Hz(), s.f0Hz(), s.f0Hz() / (2 * s.qLoaded()), 0,
                 topology == Topology.TRANSMISSION ? s.amplitude() : -s.amplitude(), 0, s.background(), 0, 0);
+        ResponseModel magnitudeModel = magnitudeOnly(model);
         return new TraceFit(p, c, q -> new ResonanceShape(q[0], q[1], q[2], q[3], cos),
-                magnitudeOnly(model), Method.HALF_POWER, Double.NaN, noise);
+                magnitudeModel, Method.HALF_POWER, Double.NaN, noise,
+                ResonanceEstimator.magnitudeResidualPower(f, magnitude, magnitudeModel));
     }
 
     private static ResponseModel magnitudeOnly(ResponseModel complex) {

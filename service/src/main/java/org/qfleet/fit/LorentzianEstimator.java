@@ -1,6 +1,7 @@
 package org.qfleet.fit;
 
 import org.qfleet.sweep.Topology;
+import org.qfleet.sweep.Trace;
 
 /**
  * Magnitude-only estimator: the Lorentzian-with-background fit of {@link LorentzianProblem},
@@ -8,11 +9,18 @@ import org.qfleet.sweep.Topology;
  * phase the circle's rotation is only known through the line's asymmetry, and a reflection or a
  * notch is read as under-coupled.
  */
-final class LorentzianEstimator {
+final class LorentzianEstimator implements ResonanceEstimator {
 
     private static final double BACKGROUND_SIGNIFICANCE = 13.8;
 
-    TraceFit fit(double[] frequencyHz, double[] magnitude, Topology topology) throws FitException {
+    @Override
+    public Method method() {
+        return Method.LORENTZIAN;
+    }
+
+    @Override
+    public TraceFit fit(double[] frequencyHz, Trace trace, Topology topology) throws FitException {
+        double[] magnitude = ResonanceEstimator.magnitude(trace);
         int n = frequencyHz.length;
         double referenceHz = 0.5 * (frequencyHz[0] + frequencyHz[n - 1]);
         double scaleHz = 0.5 * (frequencyHz[n - 1] - frequencyHz[0]);
@@ -67,7 +75,9 @@ final class LorentzianEstimator {
         LorentzianShape mapping = new LorentzianShape(referenceHz, scaleHz, background, asymmetric);
         // Residual per point of |S|, for comparison with the noise: sqrt(chi2 / n) times sigma.
         double residualSigma = Math.sqrt(sigma2) * floor;
-        return new TraceFit(p, covariance, mapping::shape, mapping.model(p), Method.LORENTZIAN, residualSigma, noise);
+        ResponseModel model = mapping.model(p);
+        return new TraceFit(p, covariance, mapping::shape, model, Method.LORENTZIAN, residualSigma, noise,
+                ResonanceEstimator.magnitudeResidualPower(frequencyHz, magnitude, model));
     }
 
     /** Inverse variance of |S|^2 for complex noise of sigma per component: 4 sigma^2 (P + sigma^2). */

@@ -43,7 +43,7 @@ final class QualityChecks {
     }
 
     /** Residual-based flags for the main trace: poor fit, and a second resonance away from f0. */
-    static Set<QualityFlag> residuals(double[] f, double[] re, double[] im, boolean phase, TraceFit fit) {
+    static Set<QualityFlag> residuals(double[] f, TraceFit fit) {
         Set<QualityFlag> flags = EnumSet.noneOf(QualityFlag.class);
         ResonanceShape shape = fit.shape();
         double noise = Math.max(fit.noiseSigma(), RELATIVE_RESIDUAL_FLOOR * shape.amplitude());
@@ -54,14 +54,8 @@ final class QualityChecks {
             flags.add(QualityFlag.POOR_FIT);
         }
         int n = f.length;
-        double[] r2 = new double[n];
-        double[] m = new double[2];
-        for (int i = 0; i < n; i++) {
-            fit.model().evaluate(f[i], m);
-            double dr = (phase ? re[i] : Math.hypot(re[i], im[i])) - m[0];
-            double di = phase ? im[i] - m[1] : 0;
-            r2[i] = dr * dr + di * di;
-        }
+        double[] r2 = fit.residualPower();
+        boolean phase = fit.model().hasPhase();
         // Five-point means of |r|^2 above nine times their expectation are not noise (the chance is below 1e-6).
         double expected = (phase ? 2 : 1) * noise * noise;
         double halfWidth = shape.f0Hz() / (2 * shape.qLoaded());

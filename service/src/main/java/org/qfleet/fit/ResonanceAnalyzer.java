@@ -1,8 +1,10 @@
 package org.qfleet.fit;
 
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.qfleet.sweep.SParameter;
@@ -18,9 +20,16 @@ import org.qfleet.sweep.Trace;
  */
 public final class ResonanceAnalyzer {
 
-    private final ComplexCircleEstimator circle = new ComplexCircleEstimator();
-    private final LorentzianEstimator lorentzian = new LorentzianEstimator();
-    private final HalfPowerEstimator halfPower = new HalfPowerEstimator();
+    private final Map<Method, ResonanceEstimator> estimators = estimators(
+            new ComplexCircleEstimator(), new LorentzianEstimator(), new HalfPowerEstimator());
+
+    private static Map<Method, ResonanceEstimator> estimators(ResonanceEstimator... all) {
+        Map<Method, ResonanceEstimator> map = new EnumMap<>(Method.class);
+        for (ResonanceEstimator e : all) {
+            map.put(e.method(), e);
+        }
+        return map;
+    }
 
     public ResonanceResult analyze(Sweep sweep) throws FitException {
         return analyze(sweep, FitOptions.AUTOMATIC);
@@ -53,20 +62,7 @@ public final class ResonanceAnalyzer {
 
     private TraceFit fitTrace(double[] f, Trace trace, Topology topology, Method method) throws FitException {
         Method chosen = method != null ? method : trace.phaseKnown() ? Method.COMPLEX_CIRCLE : Method.LORENTZIAN;
-        if (chosen == Method.COMPLEX_CIRCLE && !trace.phaseKnown()) {
-            throw new FitException("the complex-circle fit needs phase, and this trace is magnitude only");
-        }
-        switch (chosen) {
-            case COMPLEX_CIRCLE: {
-                CircleFit fit = circle.fit(f, trace.re(), trace.im(), topology);
-                return new TraceFit(fit.parameters(), fit.covariance(), p -> ResonanceShape.of(fit.model(p)),
-                        fit.model(), Method.COMPLEX_CIRCLE, fit.sigma(), NoiseEstimate.complexSigma(trace.re(), trace.im()));
-            }
-            case LORENTZIAN:
-                return lorentzian.fit(f, magnitude(trace), topology);
-            default:
-                return halfPower.fit(f, magnitude(trace), topology);
-        }
+        return estimators.get(chosen).fit(f, trace, topology);
     }
 
     /** S11 and S22 circles when both are there with phase and show a resonance; empty otherwise. */
@@ -117,7 +113,7 @@ public final class ResonanceAnalyzer {
 
         Set<QualityFlag> flags = EnumSet.noneOf(QualityFlag.class);
         flags.addAll(QualityChecks.sweepDesign(f, shape.f0Hz(), shape.qLoaded()));
-        flags.addAll(QualityChecks.residuals(f, main.re(), main.im(), mainFit.model().hasPhase(), mainFit));
+        flags.addAll(QualityChecks.residuals(f, mainFit));
         double snrDb = 20 * Math.log10(shape.amplitude() / mainFit.noiseSigma());
         if (snrDb < QualityChecks.MIN_SNR_DB) {
             flags.add(QualityFlag.LOW_SNR);
@@ -197,11 +193,4 @@ public final class ResonanceAnalyzer {
         return shapes;
     }
 
-    private static double[] magnitude(Trace trace) {
-        double[] m = new double[trace.size()];
-        for (int i = 0; i < m.length; i++) {
-            m[i] = trace.magnitude(i);
-        }
-        return m;
-    }
 }

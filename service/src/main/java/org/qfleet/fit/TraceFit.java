@@ -13,9 +13,10 @@ import java.util.function.Function;
  * @param method        the estimator
  * @param residualSigma RMS residual per real component
  * @param noiseSigma    noise per real component estimated from the data alone
+ * @param residualPower |data - model|^2 at every point (of |S| for magnitude-only models)
  */
 record TraceFit(double[] parameters, double[][] covariance, Function<double[], ResonanceShape> shapeOf,
-                ResponseModel model, Method method, double residualSigma, double noiseSigma) {
+                ResponseModel model, Method method, double residualSigma, double noiseSigma, double[] residualPower) {
 
     ResonanceShape shape() {
         return shapeOf.apply(parameters);

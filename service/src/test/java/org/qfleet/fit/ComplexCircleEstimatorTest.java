@@ -39,7 +39,7 @@ class ComplexCircleEstimatorTest {
     void recoversAnExactCircleWithDelayLeakageAndRotation() throws FitException {
         CircleModel truth = new CircleModel(3.6001e9, 3.6001e9, 3.6e9 / (2 * 850), 12e-9, 0.04, -0.05, 0.02, 0.01, 1e-9);
         double[][] d = sample(truth, 10, 0, 1);
-        CircleFit fit = new ComplexCircleEstimator().fit(d[0], d[1], d[2], Topology.NOTCH);
+        CircleFit fit = new ComplexCircleEstimator().fitCircle(d[0], d[1], d[2], Topology.NOTCH);
         CircleModel m = fit.model();
         assertThat(m.f0Hz()).isCloseTo(truth.f0Hz(), within(1e-3));
         assertThat(m.qLoaded()).isCloseTo(truth.qLoaded(), within(1e-6 * truth.qLoaded()));
@@ -53,7 +53,7 @@ class ComplexCircleEstimatorTest {
     void agreesWithCommonsMathLevenbergMarquardtOnNoisyData() throws FitException {
         CircleModel truth = new CircleModel(10.4e9, 10.4e9 + 2e5, 10.4e9 / (2 * 5400), 4e-9, 0.08, 0.03, -0.6, 0.7, -2e-9);
         double[][] d = sample(truth, 8, 0.002, 11);
-        CircleFit ours = new ComplexCircleEstimator().fit(d[0], d[1], d[2], Topology.NOTCH);
+        CircleFit ours = new ComplexCircleEstimator().fitCircle(d[0], d[1], d[2], Topology.NOTCH);
 
         double ref = ours.referenceHz();
         double scale = ours.scaleHz();
