@@ -10,6 +10,7 @@ import java.util.Set;
 import org.qfleet.sweep.SParameter;
 import org.qfleet.sweep.Sweep;
 import org.qfleet.sweep.Topology;
+import org.qfleet.sweep.TopologyGuess;
 import org.qfleet.sweep.Trace;
 
 /**
@@ -36,8 +37,7 @@ public final class ResonanceAnalyzer {
     }
 
     public ResonanceResult analyze(Sweep sweep, FitOptions options) throws FitException {
-        Topology topology = sweep.topology() != null ? sweep.topology()
-                : sweep.has(SParameter.S21) ? Topology.TRANSMISSION : Topology.REFLECTION;
+        Topology topology = sweep.topology() != null ? sweep.topology() : TopologyGuess.of(sweep);
         SParameter mainParameter = topology == Topology.REFLECTION ? SParameter.S11 : SParameter.S21;
         Trace main = sweep.trace(mainParameter).orElseThrow(() -> new FitException(
                 "a " + topology.wireName() + " sweep needs " + mainParameter.wireName() + ", which this one lacks"));
@@ -144,6 +144,10 @@ public final class ResonanceAnalyzer {
         if (route == CouplingRoute.TRANSMISSION_SYMMETRIC && shape.amplitude() >= 1) {
             throw new FitException(String.format(
                     "|S21(f0)| = %.4f is not below 1: Qu is undefined; check the calibration of the station", shape.amplitude()));
+        }
+        if (route == CouplingRoute.NOTCH && shape.amplitude() > 2 * shape.background()) {
+            throw new FitException("the sweep shows a peak on a weak background, not a dip: "
+                    + "is it a transmission measurement (--topology transmission)?");
         }
         if (route == CouplingRoute.REFLECTION && shape.relativeDiameter() >= 2) {
             throw new FitException("the reflection circle is larger than the unit circle allows; check the calibration");

@@ -32,10 +32,10 @@ public final class SweepFiles {
 
     /**
      * The topology to assume for a file that does not say: reflection when the sweep has S11 but
-     * no S21 (a 1-port file), transmission otherwise.
+     * no S21 (a 1-port file), notch when |S21| dips rather than peaks, transmission otherwise.
      */
     public static Topology defaultTopology(Sweep sweep) {
-        return sweep.has(SParameter.S11) && !sweep.has(SParameter.S21) ? Topology.REFLECTION : Topology.TRANSMISSION;
+        return TopologyGuess.of(sweep);
     }
 
     /** Never throws for bad content: every problem becomes a failed outcome with a clear reason. */
