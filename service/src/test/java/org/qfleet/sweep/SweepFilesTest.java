@@ -32,7 +32,8 @@ class SweepFilesTest {
         assertThat(two.ok()).isTrue();
         assertThat(two.source()).isEqualTo(s2p.toString());
         assertThat(two.sweep().topology()).isNull();
-        assertThat(SweepFiles.defaultTopology(two.sweep())).isEqualTo(Topology.TRANSMISSION);
+        // A two-port file is a transmission or a notch, decided by the shape of |S21| (TopologyGuessTest).
+        assertThat(SweepFiles.defaultTopology(two.sweep())).isNotEqualTo(Topology.REFLECTION);
         assertThat(one.sweep().traces()).containsOnlyKeys(SParameter.S11);
         assertThat(SweepFiles.defaultTopology(one.sweep())).isEqualTo(Topology.REFLECTION);
     }
