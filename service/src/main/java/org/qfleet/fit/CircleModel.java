@@ -2,8 +2,8 @@ package org.qfleet.fit;
 
 /**
  * The resonance circle with delay and tilt:
- * S(f) = exp(-j 2 pi (f - fRef) tau) (1 + k (f - fRef)) (B + A / (1 + j (f - f0) / gamma)),
- * where gamma = f0 / (2 QL) is the half width at half power, k a real magnitude slope, A the complex resonance (the circle's
+ * S(f) = exp(-j 2 pi (f - fRef) tau) exp(k (f - fRef)) (B + A / (1 + j (f - f0) / gamma)),
+ * where gamma = f0 / (2 QL) is the half width at half power, k a magnitude slope (nepers per hertz, linear in decibels), A the complex resonance (the circle's
  * diameter as a vector) and B the complex background (leakage, or the off-resonance level of a
  * notch or a reflection). The phase of A relative to B is the rotation from coupling reactance
  * (Kajfez, IEEE Trans. MTT 1994; Probst et al., Rev. Sci. Instrum. 86, 024706, 2015).
@@ -34,7 +34,7 @@ public record CircleModel(
         double mr = backgroundRe + amplitudeRe * lr - amplitudeIm * li;
         double mi = backgroundIm + amplitudeRe * li + amplitudeIm * lr;
         double phase = -2 * Math.PI * (frequencyHz - referenceHz) * delaySeconds;
-        double gain = 1 + tiltPerHz * (frequencyHz - referenceHz);
+        double gain = Math.exp(tiltPerHz * (frequencyHz - referenceHz));
         double c = gain * Math.cos(phase);
         double s = gain * Math.sin(phase);
         reIm[0] = mr * c - mi * s;

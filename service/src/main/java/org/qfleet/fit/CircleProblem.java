@@ -2,7 +2,7 @@ package org.qfleet.fit;
 
 /**
  * Least squares of the resonance circle with delay on normalized frequency x = (f - fRef) / scale:
- * exp(-j t x) (1 + s x) (B + A g / (g + j (x - x0))).
+ * exp(-j t x) exp(s x) (B + A g / (g + j (x - x0))).
  * Parameters: [br, bi, ar, ai, x0, g, t] with background, [ar, ai, x0, g, t] without, and s appended
  * when a magnitude tilt is fitted; g is the half width and t = 2 pi tau scale. A real tilt and a
  * delay act on the background in quadrature, so both can be told apart when the background is large
@@ -19,6 +19,7 @@ final class CircleProblem implements LeastSquaresProblem {
     private final boolean equallySpaced;
     private final double[] cos;
     private final double[] sin;
+    private final double[] gain;
     private final double[][] scoreJtj = new double[7][7];
     private final double[] scoreJtr = new double[7];
     private final double[] scoredAt = new double[5];
@@ -31,6 +32,7 @@ final class CircleProblem implements LeastSquaresProblem {
         this.tilt = tilt;
         this.equallySpaced = Phasors.equallySpaced(x);
         java.util.Arrays.fill(scoredAt, Double.NaN);
+        this.gain = new double[x.length];
         this.cos = new double[x.length];
         this.sin = new double[x.length];
     }
@@ -79,6 +81,7 @@ final class CircleProblem implements LeastSquaresProblem {
         double g = p[o + 3];
         double slope = tilt ? p[o + 5] : 0;
         Phasors.fill(p[o + 4], x, equallySpaced, cos, sin);
+        Phasors.fillGain(slope, x, equallySpaced, gain);
         double g2 = g * g;
         double cost = 0;
         for (int k = 0; k < x.length; k++) {
@@ -90,7 +93,7 @@ final class CircleProblem implements LeastSquaresProblem {
             double dd = 1 / (g2 + u * u);
             double lr = g2 * dd;
             double li = -g * u * dd;
-            double k1 = 1 + slope * x[k];
+            double k1 = gain[k];
             double rr = wr - k1 * (br + ar * lr - ai * li);
             double ri = wi - k1 * (bi + ar * li + ai * lr);
             cost += rr * rr + ri * ri;
@@ -109,6 +112,7 @@ final class CircleProblem implements LeastSquaresProblem {
         double g = p[o + 3];
         double slope = tilt ? p[o + 5] : 0;
         Phasors.fill(p[o + 4], x, equallySpaced, cos, sin);
+        Phasors.fillGain(slope, x, equallySpaced, gain);
         double[] out = new double[x.length];
         for (int k = 0; k < x.length; k++) {
             double wr = cos[k] * zr[k] + sin[k] * zi[k];
@@ -117,7 +121,7 @@ final class CircleProblem implements LeastSquaresProblem {
             double dd = 1 / (g * g + u * u);
             double lr = g * g * dd;
             double li = -g * u * dd;
-            double k1 = 1 + slope * x[k];
+            double k1 = gain[k];
             double rr = wr - k1 * (br + ar * lr - ai * li);
             double ri = wi - k1 * (bi + ar * li + ai * lr);
             out[k] = rr * rr + ri * ri;
@@ -449,6 +453,7 @@ final class CircleProblem implements LeastSquaresProblem {
         double t = p[6];
         double slope = p[7];
         Phasors.fill(t, x, equallySpaced, cos, sin);
+        Phasors.fillGain(slope, x, equallySpaced, gain);
         double g2 = g * g;
         double cost = 0;
         double a00 = 0;
@@ -507,7 +512,7 @@ final class CircleProblem implements LeastSquaresProblem {
             double li = -g * u * dd;
             double br0 = br + ar * lr - ai * li;
             double bi0 = bi + ar * li + ai * lr;
-            double k1 = 1 + slope * xk;
+            double k1 = gain[k];
             double mr = k1 * br0;
             double mi = k1 * bi0;
             double rr = wr - mr;
@@ -532,8 +537,8 @@ final class CircleProblem implements LeastSquaresProblem {
             double i5 = u * qr;
             double r6 = xk * mi;
             double i6 = -xk * mr;
-            double r7 = xk * br0;
-            double i7 = xk * bi0;
+            double r7 = xk * mr;
+            double i7 = xk * mi;
             v0 += r0 * rr + i0 * ri;
             v1 += r1 * rr + i1 * ri;
             v2 += r2 * rr + i2 * ri;

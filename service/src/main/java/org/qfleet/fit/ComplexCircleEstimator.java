@@ -49,7 +49,10 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         for (int i = 0; i < n; i++) {
             x[i] = (frequencyHz[i] - referenceHz) / scaleHz;
         }
-        double[] peak = StartingPoint.speedPeak(x, re, im);
+        // Behind a large background (notch, reflection) a long delay spins the whole trace faster than
+        // the resonance moves along it: take the delay out first, from the background's phase slope.
+        double spin = topology == Topology.TRANSMISSION ? 0 : StartingPoint.backgroundDelay(x, re, im);
+        double[] peak = spin == 0 ? StartingPoint.speedPeak(x, re, im) : StartingPoint.speedPeak(x, StartingPoint.rotated(x, re, im, spin));
         double x0 = peak[0];
         double g = peak[1];
         double t = StartingPoint.delay(x, re, im, x0, g);

@@ -64,4 +64,29 @@ final class Phasors {
             cb = nb;
         }
     }
+
+    /** Fills exp(s x_i), a magnitude slope linear in decibels, by repeated multiplication when equally spaced. */
+    static void fillGain(double s, double[] x, boolean equallySpaced, double[] gain) {
+        int n = x.length;
+        if (s == 0) {
+            java.util.Arrays.fill(gain, 0, n, 1.0);
+            return;
+        }
+        if (!equallySpaced || n < 3) {
+            for (int i = 0; i < n; i++) {
+                gain[i] = Math.exp(s * x[i]);
+            }
+            return;
+        }
+        double step = (x[n - 1] - x[0]) / (n - 1);
+        double ratio = Math.exp(s * step);
+        double value = 0;
+        for (int i = 0; i < n; i++) {
+            if ((i & 63) == 0) {
+                value = Math.exp(s * (x[0] + i * step));
+            }
+            gain[i] = value;
+            value *= ratio;
+        }
+    }
 }

@@ -50,14 +50,27 @@ public final class ResonanceAnalyzer {
             case NOTCH -> CouplingRoute.NOTCH;
             case REFLECTION -> CouplingRoute.REFLECTION;
         };
+        Set<QualityFlag> portFlags = EnumSet.noneOf(QualityFlag.class);
         if (topology == Topology.TRANSMISSION && options.method() != Method.HALF_POWER) {
             Optional<List<TraceFit>> ports = fitPorts(sweep);
-            if (ports.isPresent()) {
+            if (ports.isPresent() && sameResonance(mainFit, ports.get())) {
                 fits.addAll(ports.get());
                 route = CouplingRoute.TRANSMISSION_PORTS;
+            } else if (ports.isPresent()) {
+                // The reflection circles describe another resonance than S21: trust S21 alone, and say so.
+                portFlags.add(QualityFlag.COUPLING_MISMATCH);
             }
         }
-        return assemble(sweep, main, fits, route);
+        ResonanceResult result = assemble(sweep, main, fits, route);
+        if (portFlags.isEmpty()) {
+            return result;
+        }
+        List<QualityFlag> flags = new ArrayList<>(result.flags());
+        flags.addAll(portFlags);
+        return new ResonanceResult(result.f0Hz(), result.f0UncertaintyHz(), result.qLoaded(), result.qLoadedUncertainty(),
+                result.qUnloaded(), result.qUnloadedUncertainty(), result.qExternal(), result.coupling1(), result.coupling2(),
+                result.resonanceDb(), result.method(), result.route(), result.snrDb(), result.residualRatio(),
+                flags.stream().distinct().toList(), result.model());
     }
 
     private TraceFit fitTrace(double[] f, Trace trace, Topology topology, Method method) throws FitException {
@@ -82,6 +95,28 @@ public final class ResonanceAnalyzer {
         } catch (FitException e) {
             return Optional.empty();
         }
+    }
+
+    /**
+     * Whether the reflection circles show the resonance S21 shows: f0 and QL agree within five
+     * combined standard uncertainties, or 1 % of the width and 2 % of QL when the data are nearly noiseless.
+     */
+    private static boolean sameResonance(TraceFit main, List<TraceFit> ports) {
+        ResonanceShape s21 = main.shape();
+        double sf = Propagation.standardUncertainty(List.of(main), s -> s.get(0).f0Hz());
+        double sq = Propagation.standardUncertainty(List.of(main), s -> s.get(0).qLoaded());
+        double width = s21.f0Hz() / s21.qLoaded();
+        for (TraceFit port : ports) {
+            ResonanceShape p = port.shape();
+            double pf = Propagation.standardUncertainty(List.of(port), s -> s.get(0).f0Hz());
+            double pq = Propagation.standardUncertainty(List.of(port), s -> s.get(0).qLoaded());
+            boolean f0Agrees = Math.abs(p.f0Hz() - s21.f0Hz()) <= Math.max(5 * Math.hypot(sf, pf), 0.01 * width);
+            boolean qlAgrees = Math.abs(p.qLoaded() - s21.qLoaded()) <= Math.max(5 * Math.hypot(sq, pq), 0.02 * s21.qLoaded());
+            if (!f0Agrees || !qlAgrees) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** A port circle is usable when it has a background to normalize by and stands out of the noise. */
@@ -170,7 +205,8 @@ public final class ResonanceAnalyzer {
         double[] w = new double[fits.size()];
         for (int i = 0; i < w.length; i++) {
             double sigma = Propagation.standardUncertainty(List.of(fits.get(i)), s -> quantity.applyAsDouble(s.get(0)));
-            w[i] = sigma > 0 ? 1 / (sigma * sigma) : (i == 0 ? 1 : 0);
+            // A trace whose uncertainty is unknown or infinite does not vote; the main trace always counts.
+            w[i] = sigma > 0 && Double.isFinite(sigma) ? 1 / (sigma * sigma) : (i == 0 ? 1 : 0);
         }
         return w;
     }

@@ -116,6 +116,44 @@ final class StartingPoint {
     }
 
     /**
+     * Delay from the phase slope alone, weighted by |S|^2 dx^2: right where a large background
+     * dominates the trace, whose phase turns only with the delay.
+     *
+     * @return t = 2 pi tau scale
+     */
+    static double backgroundDelay(double[] x, double[] re, double[] im) {
+        double sw = 0;
+        double sws = 0;
+        for (int i = 0; i < x.length - 1; i++) {
+            double cr = re[i + 1] * re[i] + im[i + 1] * im[i];
+            double ci = im[i + 1] * re[i] - re[i + 1] * im[i];
+            double dx = x[i + 1] - x[i];
+            double w = Math.sqrt(cr * cr + ci * ci) * dx * dx;
+            sw += w;
+            sws += w * Angles.atan2(ci, cr) / dx;
+        }
+        return sw > 0 ? -sws / sw : 0;
+    }
+
+    /** The trace with the delay t taken out, as {re, im}. */
+    static double[][] rotated(double[] x, double[] re, double[] im, double t) {
+        int n = x.length;
+        double[] cos = new double[n];
+        double[] sin = new double[n];
+        Phasors.fill(t, x, Phasors.equallySpaced(x), cos, sin);
+        double[][] out = new double[2][n];
+        for (int i = 0; i < n; i++) {
+            out[0][i] = cos[i] * re[i] + sin[i] * im[i];
+            out[1][i] = cos[i] * im[i] - sin[i] * re[i];
+        }
+        return out;
+    }
+
+    static double[] speedPeak(double[] x, double[][] reIm) {
+        return speedPeak(x, reIm[0], reIm[1]);
+    }
+
+    /**
      * Delay from the phase slope: between neighbouring points the slope is -t plus the resonance's
      * own contribution, shaped like g / (g^2 + (x - x0)^2) for a transmission peak. A weighted
      * regression on both (weights |S|^2 dx^2, the inverse variance of a phase slope) separates them.

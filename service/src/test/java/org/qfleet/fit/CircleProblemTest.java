@@ -23,14 +23,14 @@ class CircleProblemTest {
         }
     }
 
-    /** exp(-j t x) (1 + s x) (B + A g / (g + j (x - x0))) with p = [br, bi, ar, ai, x0, g, t, s]. */
+    /** exp(-j t x) exp(s x) (B + A g / (g + j (x - x0))) with p = [br, bi, ar, ai, x0, g, t, s]. */
     private static double[] model(double xk, double[] q) {
         double u = xk - q[4];
         double g = q[5];
         double den = g * g + u * u;
         double lr = g * g / den;
         double li = -g * u / den;
-        double gain = 1 + q[7] * xk;
+        double gain = Math.exp(q[7] * xk);
         double mr = gain * (q[0] + q[2] * lr - q[3] * li);
         double mi = gain * (q[1] + q[2] * li + q[3] * lr);
         double c = Math.cos(q[6] * xk);

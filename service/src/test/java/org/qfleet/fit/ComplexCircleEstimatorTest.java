@@ -108,7 +108,7 @@ class ComplexCircleEstimatorTest {
         return new Pair<>(new ArrayRealVector(value), new Array2DRowRealMatrix(jac, false));
     }
 
-    /** exp(-j t x) (1 + s x) (B + A g / (g + j (x - x0))), p = [br, bi, ar, ai, x0, g, t, s]. */
+    /** exp(-j t x) exp(s x) (B + A g / (g + j (x - x0))), p = [br, bi, ar, ai, x0, g, t, s]. */
     private static double[] circle(double x, double[] p) {
         double u = x - p[4];
         double g = p[5];
@@ -117,7 +117,7 @@ class ComplexCircleEstimatorTest {
         double li = -g * u / den;
         double mr = p[0] + p[2] * lr - p[3] * li;
         double mi = p[1] + p[2] * li + p[3] * lr;
-        double gain = 1 + p[7] * x;
+        double gain = Math.exp(p[7] * x);
         double c = gain * Math.cos(p[6] * x);
         double s = -gain * Math.sin(p[6] * x);
         return new double[] {mr * c - mi * s, mr * s + mi * c};
