@@ -68,7 +68,20 @@ final class CircleProblem implements LeastSquaresProblem {
         if (!background) {
             return plainKernel(p, jtj, jtr);
         }
-        return tilt ? tiltKernel(p, jtj, jtr) : backgroundKernel(p, jtj, jtr);
+        return tilt ? tiltKernel(p, jtj, jtr) : backgroundWithoutTilt(p, jtj, jtr);
+    }
+
+    /** The background model is the tilted one with the tilt held at zero: its leading 7 x 7 block. */
+    private double backgroundWithoutTilt(double[] p, double[][] jtj, double[] jtr) {
+        double[] p8 = java.util.Arrays.copyOf(p, 8);
+        double[][] jtj8 = new double[8][8];
+        double[] jtr8 = new double[8];
+        double cost = tiltKernel(p8, jtj8, jtr8);
+        for (int i = 0; i < 7; i++) {
+            System.arraycopy(jtj8[i], i, jtj[i], i, 7 - i);
+            jtr[i] = jtr8[i];
+        }
+        return cost;
     }
 
     private double costOnly(double[] p) {
@@ -280,165 +293,6 @@ final class CircleProblem implements LeastSquaresProblem {
             jtr7[0] = c0r;
             jtr7[1] = c0i;
         }
-        return cost;
-    }
-
-    /** Unrolled accumulation for 7 parameters (br, bi, ar, ai, x0, g, t). */
-    private double backgroundKernel(double[] p, double[][] jtj, double[] jtr) {
-        double br = p[0];
-        double bi = p[1];
-        double ar = p[2];
-        double ai = p[3];
-        double x0 = p[4];
-        double g = p[5];
-        double t = p[6];
-        double slope = 0;
-        Phasors.fill(t, x, equallySpaced, cos, sin);
-        double g2 = g * g;
-        double cost = 0;
-        double a00 = 0;
-        double a01 = 0;
-        double a02 = 0;
-        double a03 = 0;
-        double a04 = 0;
-        double a05 = 0;
-        double a06 = 0;
-        double a11 = 0;
-        double a12 = 0;
-        double a13 = 0;
-        double a14 = 0;
-        double a15 = 0;
-        double a16 = 0;
-        double a22 = 0;
-        double a23 = 0;
-        double a24 = 0;
-        double a25 = 0;
-        double a26 = 0;
-        double a33 = 0;
-        double a34 = 0;
-        double a35 = 0;
-        double a36 = 0;
-        double a44 = 0;
-        double a45 = 0;
-        double a46 = 0;
-        double a55 = 0;
-        double a56 = 0;
-        double a66 = 0;
-        double v0 = 0;
-        double v1 = 0;
-        double v2 = 0;
-        double v3 = 0;
-        double v4 = 0;
-        double v5 = 0;
-        double v6 = 0;
-        for (int k = 0; k < x.length; k++) {
-            double c = cos[k];
-            double s = sin[k];
-            double xk = x[k];
-            double wr = c * zr[k] + s * zi[k];
-            double wi = c * zi[k] - s * zr[k];
-            double u = xk - x0;
-            double dd = 1 / (g2 + u * u);
-            double lr = g2 * dd;
-            double li = -g * u * dd;
-            double br0 = br + ar * lr - ai * li;
-            double bi0 = bi + ar * li + ai * lr;
-            double k1 = 1 + slope * xk;
-            double mr = k1 * br0;
-            double mi = k1 * bi0;
-            double rr = wr - mr;
-            double ri = wi - mi;
-            cost += rr * rr + ri * ri;
-            double dd2 = dd * dd;
-            double qr0 = (g2 - u * u) * dd2;
-            double qi0 = -2 * g * u * dd2;
-            double qr = k1 * (ar * qr0 - ai * qi0);
-            double qi = k1 * (ar * qi0 + ai * qr0);
-            double r0 = k1;
-            double i0 = 0;
-            double r1 = 0;
-            double i1 = k1;
-            double r2 = k1 * lr;
-            double i2 = k1 * li;
-            double r3 = -k1 * li;
-            double i3 = k1 * lr;
-            double r4 = -g * qi;
-            double i4 = g * qr;
-            double r5 = -u * qi;
-            double i5 = u * qr;
-            double r6 = xk * mi;
-            double i6 = -xk * mr;
-            v0 += r0 * rr + i0 * ri;
-            v1 += r1 * rr + i1 * ri;
-            v2 += r2 * rr + i2 * ri;
-            v3 += r3 * rr + i3 * ri;
-            v4 += r4 * rr + i4 * ri;
-            v5 += r5 * rr + i5 * ri;
-            v6 += r6 * rr + i6 * ri;
-            a00 += r0 * r0 + i0 * i0;
-            a01 += r0 * r1 + i0 * i1;
-            a02 += r0 * r2 + i0 * i2;
-            a03 += r0 * r3 + i0 * i3;
-            a04 += r0 * r4 + i0 * i4;
-            a05 += r0 * r5 + i0 * i5;
-            a06 += r0 * r6 + i0 * i6;
-            a11 += r1 * r1 + i1 * i1;
-            a12 += r1 * r2 + i1 * i2;
-            a13 += r1 * r3 + i1 * i3;
-            a14 += r1 * r4 + i1 * i4;
-            a15 += r1 * r5 + i1 * i5;
-            a16 += r1 * r6 + i1 * i6;
-            a22 += r2 * r2 + i2 * i2;
-            a23 += r2 * r3 + i2 * i3;
-            a24 += r2 * r4 + i2 * i4;
-            a25 += r2 * r5 + i2 * i5;
-            a26 += r2 * r6 + i2 * i6;
-            a33 += r3 * r3 + i3 * i3;
-            a34 += r3 * r4 + i3 * i4;
-            a35 += r3 * r5 + i3 * i5;
-            a36 += r3 * r6 + i3 * i6;
-            a44 += r4 * r4 + i4 * i4;
-            a45 += r4 * r5 + i4 * i5;
-            a46 += r4 * r6 + i4 * i6;
-            a55 += r5 * r5 + i5 * i5;
-            a56 += r5 * r6 + i5 * i6;
-            a66 += r6 * r6 + i6 * i6;
-        }
-        jtr[0] = v0;
-        jtr[1] = v1;
-        jtr[2] = v2;
-        jtr[3] = v3;
-        jtr[4] = v4;
-        jtr[5] = v5;
-        jtr[6] = v6;
-        jtj[0][0] = a00;
-        jtj[0][1] = a01;
-        jtj[0][2] = a02;
-        jtj[0][3] = a03;
-        jtj[0][4] = a04;
-        jtj[0][5] = a05;
-        jtj[0][6] = a06;
-        jtj[1][1] = a11;
-        jtj[1][2] = a12;
-        jtj[1][3] = a13;
-        jtj[1][4] = a14;
-        jtj[1][5] = a15;
-        jtj[1][6] = a16;
-        jtj[2][2] = a22;
-        jtj[2][3] = a23;
-        jtj[2][4] = a24;
-        jtj[2][5] = a25;
-        jtj[2][6] = a26;
-        jtj[3][3] = a33;
-        jtj[3][4] = a34;
-        jtj[3][5] = a35;
-        jtj[3][6] = a36;
-        jtj[4][4] = a44;
-        jtj[4][5] = a45;
-        jtj[4][6] = a46;
-        jtj[5][5] = a55;
-        jtj[5][6] = a56;
-        jtj[6][6] = a66;
         return cost;
     }
 

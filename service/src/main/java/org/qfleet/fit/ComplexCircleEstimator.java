@@ -43,12 +43,10 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
      */
     CircleFit fitCircle(double[] frequencyHz, double[] re, double[] im, Topology topology) throws FitException {
         int n = frequencyHz.length;
-        double referenceHz = 0.5 * (frequencyHz[0] + frequencyHz[n - 1]);
-        double scaleHz = 0.5 * (frequencyHz[n - 1] - frequencyHz[0]);
-        double[] x = new double[n];
-        for (int i = 0; i < n; i++) {
-            x[i] = (frequencyHz[i] - referenceHz) / scaleHz;
-        }
+        NormalizedFrequency normalized = NormalizedFrequency.of(frequencyHz);
+        double referenceHz = normalized.referenceHz();
+        double scaleHz = normalized.scaleHz();
+        double[] x = normalized.x();
         // Behind a large background (notch, reflection) a long delay spins the whole trace faster than
         // the resonance moves along it: take the delay out first, from the background's phase slope.
         double spin = topology == Topology.TRANSMISSION ? 0 : StartingPoint.backgroundDelay(x, re, im);

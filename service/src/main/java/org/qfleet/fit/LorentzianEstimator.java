@@ -22,12 +22,10 @@ final class LorentzianEstimator implements ResonanceEstimator {
     public TraceFit fit(double[] frequencyHz, Trace trace, Topology topology) throws FitException {
         double[] magnitude = ResonanceEstimator.magnitude(trace);
         int n = frequencyHz.length;
-        double referenceHz = 0.5 * (frequencyHz[0] + frequencyHz[n - 1]);
-        double scaleHz = 0.5 * (frequencyHz[n - 1] - frequencyHz[0]);
-        double[] x = new double[n];
-        for (int i = 0; i < n; i++) {
-            x[i] = (frequencyHz[i] - referenceHz) / scaleHz;
-        }
+        NormalizedFrequency normalized = NormalizedFrequency.of(frequencyHz);
+        double referenceHz = normalized.referenceHz();
+        double scaleHz = normalized.scaleHz();
+        double[] x = normalized.x();
         double noise = NoiseEstimate.realSigma(magnitude);
         double floor = Math.max(noise, 1e-6 * max(magnitude));
         double[] power = new double[n];

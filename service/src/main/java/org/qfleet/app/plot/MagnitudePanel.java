@@ -1,6 +1,7 @@
 package org.qfleet.app.plot;
 
 import org.qfleet.fit.ResonanceResult;
+import org.qfleet.sweep.FrequencyUnit;
 
 /**
  * Left panel: |S| in dB against frequency, the data as dots, the fit as a line, and vertical
@@ -34,7 +35,7 @@ final class MagnitudePanel {
         NiceScale x = NiceScale.inside(first - margin, last + margin, MAX_TICKS);
         NiceScale y = NiceScale.covering(db.min(), db.max(), MAX_TICKS);
         PlotArea area = new PlotArea(box.left(), box.top(), box.width(), box.height(), x, y);
-        FrequencyUnit unit = FrequencyUnit.forAxis(x);
+        FrequencyUnit unit = AxisUnits.forAxis(x);
 
         area.declareClip(svg, "clip-magnitude");
         area.drawAxes(svg, unit.hertz(), "Frequency (" + unit.symbol() + ")", "|" + main.label() + "| (dB)");

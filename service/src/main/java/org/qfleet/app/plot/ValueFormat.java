@@ -3,6 +3,7 @@ package org.qfleet.app.plot;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.Locale;
+import org.qfleet.sweep.FrequencyUnit;
 
 /** Numbers for people: a value shown to the precision its uncertainty supports. */
 final class ValueFormat {
@@ -29,11 +30,11 @@ final class ValueFormat {
         if (!Double.isFinite(hz)) {
             return "n/a";
         }
-        FrequencyUnit unit = FrequencyUnit.forValue(hz);
+        FrequencyUnit unit = AxisUnits.forValue(hz);
         if (!(Double.isFinite(uncertaintyHz) && uncertaintyHz > 0)) {
             return significant(hz / unit.hertz(), 7) + " " + unit.symbol();
         }
-        FrequencyUnit uUnit = FrequencyUnit.forValue(uncertaintyHz);
+        FrequencyUnit uUnit = AxisUnits.forValue(uncertaintyHz);
         return fixed(hz / unit.hertz(), decimalsFor(uncertaintyHz / unit.hertz())) + " " + unit.symbol()
                 + " ± " + significant(uncertaintyHz / uUnit.hertz(), 2) + " " + uUnit.symbol();
     }

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 import org.junit.jupiter.api.Test;
+import org.qfleet.sweep.FrequencyUnit;
 
 class NiceScaleTest {
 
@@ -39,7 +40,7 @@ class NiceScaleTest {
         NiceScale s = NiceScale.covering(10.395e9, 10.405e9, 7);
 
         assertThat(s.step()).isEqualTo(2e6);
-        assertThat(FrequencyUnit.forAxis(s)).isEqualTo(FrequencyUnit.GHZ);
+        assertThat(AxisUnits.forAxis(s)).isEqualTo(FrequencyUnit.GHZ);
         assertThat(s.label(s.ticks()[0], 1e9)).isEqualTo("10.394");
         assertThat(s.label(s.ticks()[1], 1e9)).isEqualTo("10.396");
     }
@@ -50,7 +51,7 @@ class NiceScaleTest {
         NiceScale s = NiceScale.covering(10.39995e9, 10.40005e9, 7);
 
         assertThat(s.step()).isEqualTo(2e4);
-        assertThat(FrequencyUnit.forAxis(s)).isEqualTo(FrequencyUnit.MHZ);
+        assertThat(AxisUnits.forAxis(s)).isEqualTo(FrequencyUnit.MHZ);
         assertThat(s.label(10_399_980_000.0, 1e6)).isEqualTo("10399.98");
     }
 
