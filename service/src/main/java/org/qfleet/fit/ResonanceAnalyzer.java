@@ -172,6 +172,12 @@ public final class ResonanceAnalyzer {
             throw new FitException("no resonance found: the fitted loaded Q is not a finite positive number");
         }
         double bandwidth = shape.f0Hz() / shape.qLoaded();
+        double span = f[f.length - 1] - f[0];
+        if (bandwidth > 3 * span) {
+            throw new FitException(String.format(
+                    "no resonance found: the fitted line (QL %.3g) is wider than three times the sweep; widen the span or check the data",
+                    shape.qLoaded()));
+        }
         if (shape.f0Hz() < f[0] - bandwidth || shape.f0Hz() > f[f.length - 1] + bandwidth) {
             throw new FitException(String.format("no resonance inside the sweep (fitted f0 %.6g Hz lies outside %.6g-%.6g Hz)",
                     shape.f0Hz(), f[0], f[f.length - 1]));
