@@ -2,7 +2,9 @@ package org.qfleet.stream;
 
 import org.apache.kafka.common.serialization.ByteArrayDeserializer;
 import org.apache.kafka.common.serialization.ByteArraySerializer;
+import org.apache.kafka.streams.StreamsConfig;
 import org.apache.kafka.streams.Topology;
+import org.apache.kafka.streams.TopologyConfig;
 import org.qfleet.verdict.ProductCatalogue;
 
 /**
@@ -22,7 +24,7 @@ public final class SweepTopology {
     public static Topology build(StreamSettings settings, ProductCatalogue catalogue) {
         SweepHandler handler = new SweepHandler(settings, catalogue);
         RejectJson rejects = new RejectJson(settings.maxRejectPayloadBytes());
-        Topology topology = new Topology();
+        Topology topology = new Topology(new TopologyConfig(new StreamsConfig(settings.streamsProperties())));
         topology.addSource(SOURCE, new ByteArrayDeserializer(), new ByteArrayDeserializer(), settings.topics().sweeps());
         topology.addProcessor(PROCESSOR, () -> new SweepProcessor(handler, rejects), SOURCE);
         topology.addSink(RESULTS_SINK, settings.topics().results(), new ByteArraySerializer(), new ByteArraySerializer(), PROCESSOR);

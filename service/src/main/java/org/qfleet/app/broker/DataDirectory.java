@@ -7,8 +7,8 @@ import java.nio.file.Path;
 import java.nio.file.SimpleFileVisitor;
 import java.nio.file.attribute.BasicFileAttributes;
 
-/** The broker's data directory: wiped on request for a clean start. */
-final class DataDirectory {
+/** The broker's data directory: wiped on request for a clean start, or when a demo ends. */
+public final class DataDirectory {
 
     private DataDirectory() {
     }
@@ -18,7 +18,7 @@ final class DataDirectory {
      * broker's (no {@code meta.properties}) unless it is empty, so a mistyped path cannot wipe a
      * home folder.
      */
-    static void wipe(Path dir) throws IOException {
+    public static void wipe(Path dir) throws IOException {
         if (!Files.exists(dir)) {
             return;
         }
