@@ -64,10 +64,10 @@ final class DemoCommand implements Callable<Integer> {
             description = "Sweeps per second the plant publishes in the live demo (default: ${DEFAULT-VALUE}).")
     double rate;
 
-    @Option(names = "--form", paramLabel = "FORM", defaultValue = "re-im", converter = TraceFormConverter.class,
-            completionCandidates = TraceFormConverter.Names.class,
-            description = "How the live demo writes traces: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
-    TraceForm form;
+    @Option(names = "--form", paramLabel = "FORM[,FORM...]", defaultValue = "re-im", split = ",",
+            converter = TraceFormConverter.class, completionCandidates = TraceFormConverter.Names.class,
+            description = "How the live demo writes traces: ${COMPLETION-CANDIDATES}; several are used in turn (default: ${DEFAULT-VALUE}).")
+    List<TraceForm> forms;
 
     @Option(names = "--every", paramLabel = "TIME", defaultValue = "5s", converter = DurationConverter.class,
             description = "Time between two summaries of the live demo (default: ${DEFAULT-VALUE}).")
@@ -110,7 +110,7 @@ final class DemoCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         try {
             return RunCommand.runUntilStopped(LiveDemo.PREFIX, config, service.catalogue(spec, config), err,
-                    new LiveDemo(err, duration, rate, seed, form, every));
+                    new LiveDemo(err, duration, rate, seed, forms, every));
         } finally {
             if (temporary != null) {
                 DataDirectory.wipe(temporary);

@@ -3,6 +3,7 @@ package org.qfleet.app;
 import java.io.PrintWriter;
 import java.time.Clock;
 import java.time.Duration;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
@@ -30,16 +31,16 @@ final class LiveDemo implements RunCommand.WhileRunning {
     private final Duration duration;
     private final double rate;
     private final long seed;
-    private final TraceForm form;
+    private final List<TraceForm> forms;
     private final Duration every;
 
     /** @param duration how long to publish, or null for until Ctrl-C */
-    LiveDemo(PrintWriter err, Duration duration, double rate, long seed, TraceForm form, Duration every) {
+    LiveDemo(PrintWriter err, Duration duration, double rate, long seed, List<TraceForm> forms, Duration every) {
         this.err = err;
         this.duration = duration;
         this.rate = rate;
         this.seed = seed;
-        this.form = form;
+        this.forms = forms;
         this.every = every;
     }
 
@@ -52,7 +53,7 @@ final class LiveDemo implements RunCommand.WhileRunning {
         console.awaitAssignment(Duration.ofSeconds(30));
         Thread reader = new Thread(console, "qfleet-demo-console");
         reader.start();
-        SweepPublisher publisher = new SweepPublisher(s.clientProperties(), s.topics().sweeps(), plant, form);
+        SweepPublisher publisher = new SweepPublisher(s.clientProperties(), s.topics().sweeps(), plant, forms);
         Thread producer = new Thread(() -> {
             try {
                 publisher.publish(0, rate, stopPublishing::get);

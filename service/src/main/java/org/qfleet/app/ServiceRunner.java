@@ -186,6 +186,9 @@ final class ServiceRunner implements AutoCloseable {
     }
 
     private static String reason(Exception e) {
+        if (e instanceof TimeoutException) {
+            return "no answer within " + ADMIN_TIMEOUT.toSeconds() + " s";
+        }
         Throwable t = e instanceof ExecutionException && e.getCause() != null ? e.getCause() : e;
         String message = t.getMessage();
         return message == null ? t.getClass().getSimpleName() : message;

@@ -1,15 +1,21 @@
 package org.qfleet.app;
 
+import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.time.Clock;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicBoolean;
 import org.apache.kafka.clients.producer.ProducerConfig;
+import org.qfleet.codec.SweepMessageWriter;
 import org.qfleet.codec.TraceForm;
 import org.qfleet.sim.DemoPlant;
+import org.qfleet.sweep.Sweep;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -23,7 +29,8 @@ import picocli.CommandLine.Spec;
         versionProvider = VersionProvider.class,
         description = {
             "Publish sweep messages of the invented demo plant (two products, eight stations, lots of",
-            "200 to 400 units) to a Kafka topic at a steady rate, keyed by lot id."},
+            "200 to 400 units) to a Kafka topic at a steady rate, keyed by lot id.",
+            "With --out DIR: write them as files DIR/<sweepId>.json instead, one message each."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
             "0:every sweep was published",
@@ -50,13 +57,17 @@ final class SimulateCommand implements Callable<Integer> {
     @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Seed of the simulated plant (default: ${DEFAULT-VALUE}).")
     long seed;
 
-    @Option(names = "--form", paramLabel = "FORM", defaultValue = "re-im", converter = TraceFormConverter.class,
-            completionCandidates = TraceFormConverter.Names.class,
-            description = "How traces are written: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
-    TraceForm form;
+    @Option(names = "--form", paramLabel = "FORM[,FORM...]", defaultValue = "re-im", split = ",",
+            converter = TraceFormConverter.class, completionCandidates = TraceFormConverter.Names.class,
+            description = "How traces are written: ${COMPLETION-CANDIDATES}; several are used in turn (default: ${DEFAULT-VALUE}).")
+    List<TraceForm> forms;
 
     @Option(names = "--kafka", paramLabel = "KEY=VALUE", description = "A Kafka producer setting, passed through (repeatable).")
     Map<String, String> kafka;
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Write the messages as files DIR/<sweepId>.json (created if needed) instead of publishing them.")
+    Path out;
 
     @Mixin
     DebugOption debug;
@@ -73,6 +84,9 @@ final class SimulateCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--count must be 0 or more, got " + count);
         }
         PrintWriter err = spec.commandLine().getErr();
+        if (out != null) {
+            return writeFiles(err);
+        }
         Map<String, Object> config = new HashMap<>();
         config.put(ProducerConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrapServers);
         if (kafka != null) {
@@ -83,7 +97,7 @@ final class SimulateCommand implements Callable<Integer> {
         Runtime.getRuntime().addShutdownHook(hook);
         long start = System.nanoTime();
         long sent;
-        SweepPublisher publisher = new SweepPublisher(config, topic, new DemoPlant(seed, Clock.systemUTC()), form);
+        SweepPublisher publisher = new SweepPublisher(config, topic, new DemoPlant(seed, Clock.systemUTC()), forms);
         try (publisher) {
             err.println("qfleet simulate: publishing " + (count == 0 ? "sweeps until Ctrl-C" : count + " sweeps")
                     + " of the invented demo plant to " + topic + " on " + bootstrapServers
@@ -106,5 +120,25 @@ final class SimulateCommand implements Callable<Integer> {
                 publisher.acknowledged(), topic, seconds, publisher.acknowledged() / seconds));
         err.flush();
         return publisher.acknowledged() == sent ? 0 : 1;
+    }
+
+    private int writeFiles(PrintWriter err) {
+        if (count == 0) {
+            throw new ParameterException(spec.commandLine(), "--out needs a --count above 0");
+        }
+        DemoPlant plant = new DemoPlant(seed, Clock.systemUTC());
+        List<SweepMessageWriter> writers = forms.stream().map(SweepMessageWriter::new).toList();
+        try {
+            Files.createDirectories(out);
+            for (long i = 0; i < count; i++) {
+                Sweep sweep = plant.next().sweep();
+                Files.write(out.resolve(sweep.info().sweepId() + ".json"), writers.get((int) (i % writers.size())).write(sweep));
+            }
+        } catch (IOException e) {
+            err.println("qfleet simulate: cannot write the sweep messages to " + out + ": " + e.getMessage());
+            return 1;
+        }
+        err.println("qfleet simulate: wrote " + count + " sweep messages of the invented demo plant to " + out);
+        return 0;
     }
 }

@@ -2,6 +2,7 @@ package org.qfleet.app;
 
 import java.nio.charset.StandardCharsets;
 import java.time.Duration;
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.concurrent.atomic.AtomicReference;
@@ -25,7 +26,7 @@ final class SweepPublisher implements AutoCloseable {
     private final KafkaProducer<byte[], byte[]> producer;
     private final String topic;
     private final DemoPlant plant;
-    private final TraceForm form;
+    private final List<TraceForm> forms;
     private final AtomicLong sent = new AtomicLong();
     private final AtomicLong acknowledged = new AtomicLong();
     private final AtomicReference<Exception> failure = new AtomicReference<>();
@@ -34,7 +35,8 @@ final class SweepPublisher implements AutoCloseable {
      * @param kafka Kafka client settings, with {@code bootstrap.servers}; they win over the
      *              publisher's defaults (idempotent, acks=all, lz4)
      */
-    SweepPublisher(Map<String, Object> kafka, String topic, DemoPlant plant, TraceForm form) {
+    /** @param forms trace forms, used in turn, one sweep each */
+    SweepPublisher(Map<String, Object> kafka, String topic, DemoPlant plant, List<TraceForm> forms) {
         Map<String, Object> config = new java.util.HashMap<>();
         config.put(ProducerConfig.ACKS_CONFIG, "all");
         config.put(ProducerConfig.ENABLE_IDEMPOTENCE_CONFIG, "true");
@@ -45,7 +47,7 @@ final class SweepPublisher implements AutoCloseable {
         this.producer = new KafkaProducer<>(config, new ByteArraySerializer(), new ByteArraySerializer());
         this.topic = topic;
         this.plant = plant;
-        this.form = form;
+        this.forms = List.copyOf(forms);
     }
 
     /**
@@ -55,7 +57,7 @@ final class SweepPublisher implements AutoCloseable {
      * @return how many were sent
      */
     long publish(long count, double ratePerSecond, BooleanSupplier stop) throws InterruptedException {
-        SweepMessageWriter writer = new SweepMessageWriter(form);
+        List<SweepMessageWriter> writers = forms.stream().map(SweepMessageWriter::new).toList();
         long start = System.nanoTime();
         long n = 0;
         while ((count == 0 || n < count) && !stop.getAsBoolean() && failure.get() == null) {
@@ -69,7 +71,7 @@ final class SweepPublisher implements AutoCloseable {
             Sweep sweep = plant.next().sweep();
             byte[] key = sweep.info().lot().getBytes(StandardCharsets.UTF_8);
             try {
-                producer.send(new ProducerRecord<>(topic, key, writer.write(sweep)), (metadata, e) -> {
+                producer.send(new ProducerRecord<>(topic, key, writers.get((int) (n % writers.size())).write(sweep)), (metadata, e) -> {
                     if (e == null) {
                         acknowledged.incrementAndGet();
                     } else {

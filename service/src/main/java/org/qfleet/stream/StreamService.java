@@ -68,6 +68,11 @@ public final class StreamService implements AutoCloseable {
         return failed.getCount() == 0;
     }
 
+    /** Tasks (input partitions) this instance processes now; changes with every rebalance. */
+    public int activeTasks() {
+        return streams.metadataForLocalThreads().stream().mapToInt(t -> t.activeTasks().size()).sum();
+    }
+
     public KafkaStreams.State state() {
         return streams.state();
     }

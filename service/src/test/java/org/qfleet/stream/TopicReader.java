@@ -59,6 +59,33 @@ final class TopicReader {
         return messages;
     }
 
+    /** Every committed record of the topic, up to its end as it is when called. */
+    static List<Message> readAll(String bootstrap, String topic, Duration timeout) {
+        List<Message> messages = new ArrayList<>();
+        try (KafkaConsumer<byte[], byte[]> consumer = new KafkaConsumer<>(Map.of(
+                ConsumerConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrap,
+                ConsumerConfig.ISOLATION_LEVEL_CONFIG, "read_committed",
+                ConsumerConfig.ENABLE_AUTO_COMMIT_CONFIG, "false"),
+                new ByteArrayDeserializer(), new ByteArrayDeserializer())) {
+            List<org.apache.kafka.common.TopicPartition> partitions = consumer.partitionsFor(topic).stream()
+                    .map(p -> new org.apache.kafka.common.TopicPartition(topic, p.partition())).toList();
+            consumer.assign(partitions);
+            consumer.seekToBeginning(partitions);
+            Map<org.apache.kafka.common.TopicPartition, Long> end = consumer.endOffsets(partitions);
+            long deadline = System.nanoTime() + timeout.toNanos();
+            while (partitions.stream().anyMatch(p -> consumer.position(p) < end.get(p))) {
+                if (System.nanoTime() > deadline) {
+                    throw new AssertionError("could not read " + topic + " to its end within " + timeout);
+                }
+                for (ConsumerRecord<byte[], byte[]> r : consumer.poll(Duration.ofMillis(200))) {
+                    messages.add(new Message(r.key() == null ? null : new String(r.key(), java.nio.charset.StandardCharsets.UTF_8),
+                            r.partition(), r.offset(), r.timestamp(), json(r.value())));
+                }
+            }
+        }
+        return messages;
+    }
+
     private static JsonNode json(byte[] value) {
         try {
             return MAPPER.readTree(value);
