@@ -57,6 +57,10 @@ public final class EmbeddedBroker implements AutoCloseable {
      */
     public static EmbeddedBroker start(Path dataDir, int port, boolean cleanStart) throws BrokerException {
         Path dir = dataDir.toAbsolutePath().normalize();
+        if (port != 0 && !FreePorts.isFree(port)) {
+            throw new BrokerException("cannot start the embedded Kafka broker: port " + port
+                    + " on localhost is in use (another broker, or another qfleet?); choose another with --broker-port", null);
+        }
         int clientPort = port == 0 ? FreePorts.find() : port;
         int controllerPort = FreePorts.find();
         try {
