@@ -22,7 +22,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
-import org.qfleet.app.ResultJson;
+import org.qfleet.codec.ResultJson;
 import org.qfleet.fit.FitException;
 import org.qfleet.fit.ResonanceAnalyzer;
 import org.qfleet.fit.ResonanceResult;

@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.function.LongSupplier;
 import org.qfleet.app.InputFiles.Input;
 import org.qfleet.app.plot.PlotDirectory;
+import org.qfleet.codec.ErrorCodes;
+import org.qfleet.codec.ResultJson;
 import org.qfleet.fit.FitException;
 import org.qfleet.fit.FitOptions;
 import org.qfleet.fit.ResonanceAnalyzer;

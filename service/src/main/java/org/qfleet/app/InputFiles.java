@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Stream;
+import org.qfleet.codec.ErrorCodes;
 
 /**
  * Turns command-line arguments into the files to read. A directory stands for the supported

@@ -22,7 +22,7 @@ class DemoCommandTest {
     void writesFitsAndPlotsTheRequestedNumberOfSweeps() throws IOException {
         Path out = dir.resolve("demo");
 
-        CommandRun run = CommandRun.of("demo", "--count", 6, "--seed", 3, "--out", out);
+        CommandRun run = CommandRun.of("demo", "--offline", "--count", 6, "--seed", 3, "--out", out);
 
         assertThat(run.exitCode()).as(run.stderr()).isZero();
         List<JsonNode> lines = run.json();
@@ -38,7 +38,7 @@ class DemoCommandTest {
 
     @Test
     void fitsTheDemoPlantsProductsNearTheirNominalQu() {
-        CommandRun run = CommandRun.of("demo", "--count", 16, "--out", dir);
+        CommandRun run = CommandRun.of("demo", "--offline", "--count", 16, "--out", dir);
 
         assertThat(run.exitCode()).isZero();
         for (JsonNode line : run.json()) {
@@ -54,9 +54,9 @@ class DemoCommandTest {
     @Test
     void aSecondRunReplacesTheFirstRunsFilesAndLeavesOthersAlone() throws IOException {
         Path own = Files.writeString(dir.resolve("bench-notes.txt"), "not ours");
-        assertThat(CommandRun.of("demo", "--count", 5, "--out", dir).exitCode()).isZero();
+        assertThat(CommandRun.of("demo", "--offline", "--count", 5, "--out", dir).exitCode()).isZero();
 
-        CommandRun second = CommandRun.of("demo", "--count", 2, "--seed", 9, "--out", dir);
+        CommandRun second = CommandRun.of("demo", "--offline", "--count", 2, "--seed", 9, "--out", dir);
 
         assertThat(second.exitCode()).isZero();
         assertThat(second.json()).hasSize(2);
@@ -67,7 +67,7 @@ class DemoCommandTest {
 
     @Test
     void aCountOutsideTheRangeIsAUsageError() {
-        CommandRun run = CommandRun.of("demo", "--count", 0, "--out", dir);
+        CommandRun run = CommandRun.of("demo", "--offline", "--count", 0, "--out", dir);
 
         assertThat(run.exitCode()).isEqualTo(2);
         assertThat(run.stderr()).contains("--count");

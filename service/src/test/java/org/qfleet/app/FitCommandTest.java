@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.qfleet.codec.ErrorCodes;
 import org.qfleet.sim.SimulatedSweep;
 import org.qfleet.sweep.FrequencyUnit;
 import org.qfleet.sweep.TouchstoneFormat;

@@ -18,6 +18,7 @@ import java.util.concurrent.atomic.AtomicLong;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.qfleet.app.plot.PlotDirectory;
+import org.qfleet.codec.ErrorCodes;
 import org.qfleet.fit.FitException;
 import org.qfleet.fit.ResonanceResult;
 import org.qfleet.sweep.InvalidSweepException;

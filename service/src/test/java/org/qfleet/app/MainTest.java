@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.qfleet.codec.ErrorCodes;
 
 /** The command line as a user meets it: exit codes, where output goes, no stack traces. */
 class MainTest {

@@ -1,4 +1,4 @@
-package org.qfleet.app;
+package org.qfleet.codec;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;

@@ -1,4 +1,4 @@
-package org.qfleet.app;
+package org.qfleet.codec;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.qfleet.app.ResonanceFixtures.CAVITY;
@@ -12,6 +12,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
+import org.qfleet.app.ResonanceFixtures;
 import org.qfleet.fit.CouplingRoute;
 import org.qfleet.fit.Method;
 import org.qfleet.fit.QualityFlag;

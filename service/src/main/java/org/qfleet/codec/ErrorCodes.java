@@ -1,4 +1,4 @@
-package org.qfleet.app;
+package org.qfleet.codec;
 
 import java.util.ArrayList;
 import java.util.Collections;

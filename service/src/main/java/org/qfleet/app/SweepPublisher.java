@@ -1,0 +1,111 @@
+package org.qfleet.app;
+
+import java.nio.charset.StandardCharsets;
+import java.time.Duration;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.BooleanSupplier;
+import org.apache.kafka.clients.producer.KafkaProducer;
+import org.apache.kafka.clients.producer.ProducerConfig;
+import org.apache.kafka.clients.producer.ProducerRecord;
+import org.apache.kafka.common.KafkaException;
+import org.apache.kafka.common.serialization.ByteArraySerializer;
+import org.qfleet.codec.SweepMessageWriter;
+import org.qfleet.codec.TraceForm;
+import org.qfleet.sim.DemoPlant;
+import org.qfleet.sweep.Sweep;
+
+/**
+ * Publishes the simulated plant's sweeps as sweep messages (key: the lot id) at a steady rate,
+ * the way a plant's test stations would. Used by {@code simulate} and {@code demo}.
+ */
+final class SweepPublisher implements AutoCloseable {
+
+    private final KafkaProducer<byte[], byte[]> producer;
+    private final String topic;
+    private final DemoPlant plant;
+    private final List<TraceForm> forms;
+    private final AtomicLong sent = new AtomicLong();
+    private final AtomicLong acknowledged = new AtomicLong();
+    private final AtomicReference<Exception> failure = new AtomicReference<>();
+
+    /**
+     * @param kafka Kafka client settings, with {@code bootstrap.servers}; they win over the
+     *              publisher's defaults (idempotent, acks=all, lz4)
+     */
+    /** @param forms trace forms, used in turn, one sweep each */
+    SweepPublisher(Map<String, Object> kafka, String topic, DemoPlant plant, List<TraceForm> forms) {
+        Map<String, Object> config = new java.util.HashMap<>();
+        config.put(ProducerConfig.ACKS_CONFIG, "all");
+        config.put(ProducerConfig.ENABLE_IDEMPOTENCE_CONFIG, "true");
+        config.put(ProducerConfig.LINGER_MS_CONFIG, "5");
+        config.put(ProducerConfig.COMPRESSION_TYPE_CONFIG, "lz4");
+        config.put(ProducerConfig.MAX_BLOCK_MS_CONFIG, "30000");
+        config.putAll(kafka);
+        this.producer = new KafkaProducer<>(config, new ByteArraySerializer(), new ByteArraySerializer());
+        this.topic = topic;
+        this.plant = plant;
+        this.forms = List.copyOf(forms);
+    }
+
+    /**
+     * Publishes up to {@code count} sweeps (0 for no limit) at {@code ratePerSecond} (0 for as fast
+     * as possible), until done or {@code stop} says so.
+     *
+     * @return how many were sent
+     */
+    long publish(long count, double ratePerSecond, BooleanSupplier stop) throws InterruptedException {
+        List<SweepMessageWriter> writers = forms.stream().map(SweepMessageWriter::new).toList();
+        long start = System.nanoTime();
+        long n = 0;
+        while ((count == 0 || n < count) && !stop.getAsBoolean() && failure.get() == null) {
+            if (ratePerSecond > 0) {
+                long due = start + (long) (n * 1e9 / ratePerSecond);
+                long wait = due - System.nanoTime();
+                if (wait > 0) {
+                    Thread.sleep(wait / 1_000_000, (int) (wait % 1_000_000));
+                }
+            }
+            Sweep sweep = plant.next().sweep();
+            byte[] key = sweep.info().lot().getBytes(StandardCharsets.UTF_8);
+            try {
+                producer.send(new ProducerRecord<>(topic, key, writers.get((int) (n % writers.size())).write(sweep)), (metadata, e) -> {
+                    if (e == null) {
+                        acknowledged.incrementAndGet();
+                    } else {
+                        failure.compareAndSet(null, e);
+                    }
+                });
+            } catch (KafkaException e) {
+                failure.compareAndSet(null, e);
+                break;
+            }
+            n++;
+            sent.set(n);
+        }
+        return n;
+    }
+
+    /** Sweeps handed to the producer so far. */
+    long sent() {
+        return sent.get();
+    }
+
+    /** Sweeps the broker has acknowledged so far. */
+    long acknowledged() {
+        return acknowledged.get();
+    }
+
+    /** The first failure to publish, if any. */
+    Exception failure() {
+        return failure.get();
+    }
+
+    /** Sends what is buffered and closes the producer. */
+    @Override
+    public void close() {
+        producer.close(Duration.ofSeconds(30));
+    }
+}

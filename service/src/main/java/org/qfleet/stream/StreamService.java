@@ -1,0 +1,89 @@
+package org.qfleet.stream;
+
+import java.time.Duration;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+import org.apache.kafka.streams.KafkaStreams;
+import org.apache.kafka.streams.errors.StreamsUncaughtExceptionHandler.StreamThreadExceptionResponse;
+import org.qfleet.verdict.ProductCatalogue;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * The running topology: starts Kafka Streams, tells when it is processing, closes it. A stream
+ * thread that dies of an unexpected failure is replaced, so a long broker outage or a transient
+ * fault is waited out rather than ending the service.
+ */
+public final class StreamService implements AutoCloseable {
+
+    private static final Logger LOG = LoggerFactory.getLogger(StreamService.class);
+
+    private final KafkaStreams streams;
+    private final CountDownLatch running = new CountDownLatch(1);
+    private final CountDownLatch failed = new CountDownLatch(1);
+
+    private StreamService(KafkaStreams streams) {
+        this.streams = streams;
+    }
+
+    /** Builds the topology and starts processing. */
+    public static StreamService start(StreamSettings settings, ProductCatalogue catalogue) {
+        KafkaStreams streams = new KafkaStreams(SweepTopology.build(settings, catalogue), settings.streamsProperties());
+        StreamService service = new StreamService(streams);
+        streams.setStateListener((now, before) -> {
+            if (now == KafkaStreams.State.RUNNING) {
+                service.running.countDown();
+            } else if (now == KafkaStreams.State.ERROR || now == KafkaStreams.State.PENDING_ERROR) {
+                service.failed.countDown();
+            }
+        });
+        streams.setUncaughtExceptionHandler(e -> {
+            LOG.warn("a stream thread failed and is replaced: {}", e.toString());
+            return StreamThreadExceptionResponse.REPLACE_THREAD;
+        });
+        streams.start();
+        return service;
+    }
+
+    /**
+     * Waits until the topology is running (partitions assigned, processing), or has failed.
+     *
+     * @return true when running within {@code timeout}
+     */
+    public boolean awaitRunning(Duration timeout) throws InterruptedException {
+        long deadline = System.nanoTime() + timeout.toNanos();
+        while (System.nanoTime() < deadline) {
+            if (running.await(100, TimeUnit.MILLISECONDS)) {
+                return true;
+            }
+            if (failed.getCount() == 0) {
+                return false;
+            }
+        }
+        return false;
+    }
+
+    /** Whether Kafka Streams has stopped for good after an error. */
+    public boolean hasFailed() {
+        return failed.getCount() == 0;
+    }
+
+    /** Tasks (input partitions) this instance processes now; changes with every rebalance. */
+    public int activeTasks() {
+        return streams.metadataForLocalThreads().stream().mapToInt(t -> t.activeTasks().size()).sum();
+    }
+
+    public KafkaStreams.State state() {
+        return streams.state();
+    }
+
+    /** Stops processing, commits what is done and leaves the group; waits at most {@code timeout}. */
+    public void close(Duration timeout) {
+        streams.close(new KafkaStreams.CloseOptions().timeout(timeout).leaveGroup(true));
+    }
+
+    @Override
+    public void close() {
+        close(Duration.ofSeconds(30));
+    }
+}

@@ -1,0 +1,116 @@
+package org.qfleet.stream;
+
+import java.util.Map;
+import java.util.Objects;
+import java.util.Properties;
+import org.apache.kafka.clients.consumer.ConsumerConfig;
+import org.apache.kafka.common.serialization.Serdes;
+import org.apache.kafka.streams.StreamsConfig;
+import org.apache.kafka.streams.errors.LogAndContinueExceptionHandler;
+import org.qfleet.sweep.SweepLimits;
+
+/**
+ * Everything the streaming service is told.
+ *
+ * @param topics                the four topics
+ * @param applicationId         Kafka Streams application id: instances with the same id share the work
+ * @param threads               stream threads in this instance
+ * @param limits                bounds on the points of a sweep
+ * @param maxSweepBytes         larger messages are rejected as oversized without being decoded
+ * @param maxRejectPayloadBytes most bytes of a bad message copied into its reject
+ * @param kafka                 Kafka client and Streams settings, passed through as they are
+ *                              ({@code bootstrap.servers}, {@code security.protocol}, ...); they
+ *                              win over the service's own defaults
+ */
+public record StreamSettings(
+        Topics topics,
+        String applicationId,
+        int threads,
+        SweepLimits limits,
+        int maxSweepBytes,
+        int maxRejectPayloadBytes,
+        Map<String, String> kafka) {
+
+    public static final String DEFAULT_APPLICATION_ID = "qfleet";
+    public static final int DEFAULT_THREADS = 2;
+    /** A 100 001-point sweep with three complex traces as text is about 10 MB. */
+    public static final int DEFAULT_MAX_SWEEP_BYTES = 16 * 1024 * 1024;
+    public static final int DEFAULT_MAX_REJECT_PAYLOAD_BYTES = 64 * 1024;
+
+    /** Settings read by the exception handlers from the Streams configuration. */
+    static final String REJECTS_TOPIC_CONFIG = "qfleet.rejects.topic";
+    static final String REJECT_PAYLOAD_CONFIG = "qfleet.rejects.payload.max.bytes";
+
+    public StreamSettings {
+        Objects.requireNonNull(topics, "topics");
+        Objects.requireNonNull(limits, "limits");
+        if (applicationId == null || applicationId.isBlank()) {
+            throw new IllegalArgumentException("the application id is blank");
+        }
+        if (threads < 1) {
+            throw new IllegalArgumentException("threads must be at least 1, got " + threads);
+        }
+        if (maxSweepBytes < 1) {
+            throw new IllegalArgumentException("the largest sweep message must be at least 1 byte, got " + maxSweepBytes);
+        }
+        if (maxRejectPayloadBytes < 0) {
+            throw new IllegalArgumentException("the reject payload bound must not be negative, got " + maxRejectPayloadBytes);
+        }
+        kafka = Map.copyOf(kafka);
+    }
+
+    /** The defaults, connecting to {@code bootstrapServers}. */
+    public static StreamSettings defaults(String bootstrapServers) {
+        return new StreamSettings(Topics.DEFAULT, DEFAULT_APPLICATION_ID, DEFAULT_THREADS, SweepLimits.DEFAULT,
+                DEFAULT_MAX_SWEEP_BYTES, DEFAULT_MAX_REJECT_PAYLOAD_BYTES,
+                Map.of(StreamsConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrapServers));
+    }
+
+    public String bootstrapServers() {
+        return kafka.get(StreamsConfig.BOOTSTRAP_SERVERS_CONFIG);
+    }
+
+    public StreamSettings withKafka(Map<String, String> newKafka) {
+        return new StreamSettings(topics, applicationId, threads, limits, maxSweepBytes, maxRejectPayloadBytes, newKafka);
+    }
+
+    public StreamSettings withTopics(Topics newTopics) {
+        return new StreamSettings(newTopics, applicationId, threads, limits, maxSweepBytes, maxRejectPayloadBytes, kafka);
+    }
+
+    public StreamSettings withApplicationId(String id) {
+        return new StreamSettings(topics, id, threads, limits, maxSweepBytes, maxRejectPayloadBytes, kafka);
+    }
+
+    public StreamSettings withLimits(SweepLimits newLimits) {
+        return new StreamSettings(topics, applicationId, threads, newLimits, maxSweepBytes, maxRejectPayloadBytes, kafka);
+    }
+
+    /**
+     * The Kafka Streams configuration: exactly-once (v2), byte-array serdes, reading from the
+     * earliest offset when the application id is new, bad records turned into rejects; then the
+     * pass-through settings, which override any of these.
+     */
+    public Properties streamsProperties() {
+        Properties p = new Properties();
+        p.put(StreamsConfig.APPLICATION_ID_CONFIG, applicationId);
+        p.put(StreamsConfig.PROCESSING_GUARANTEE_CONFIG, StreamsConfig.EXACTLY_ONCE_V2);
+        p.put(StreamsConfig.NUM_STREAM_THREADS_CONFIG, Integer.toString(threads));
+        p.put(StreamsConfig.DEFAULT_KEY_SERDE_CLASS_CONFIG, Serdes.ByteArraySerde.class.getName());
+        p.put(StreamsConfig.DEFAULT_VALUE_SERDE_CLASS_CONFIG, Serdes.ByteArraySerde.class.getName());
+        p.put(StreamsConfig.consumerPrefix(ConsumerConfig.AUTO_OFFSET_RESET_CONFIG), "earliest");
+        p.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, LogAndContinueExceptionHandler.class.getName());
+        p.put(StreamsConfig.PRODUCTION_EXCEPTION_HANDLER_CLASS_CONFIG, OversizedResultHandler.class.getName());
+        p.put(StreamsConfig.PROCESSING_EXCEPTION_HANDLER_CLASS_CONFIG, UnexpectedFailureHandler.class.getName());
+        p.put(StreamsConfig.PROCESSING_EXCEPTION_HANDLER_GLOBAL_ENABLED_CONFIG, "true");
+        p.put(REJECTS_TOPIC_CONFIG, topics.rejects());
+        p.put(REJECT_PAYLOAD_CONFIG, Integer.toString(maxRejectPayloadBytes));
+        p.putAll(kafka);
+        return p;
+    }
+
+    /** Settings for an admin or plain client: the pass-through settings that are not Streams' own. */
+    public Map<String, Object> clientProperties() {
+        return Map.copyOf(kafka);
+    }
+}

@@ -1,0 +1,34 @@
+package org.qfleet.stream;
+
+import org.apache.kafka.common.serialization.ByteArrayDeserializer;
+import org.apache.kafka.common.serialization.ByteArraySerializer;
+import org.apache.kafka.streams.StreamsConfig;
+import org.apache.kafka.streams.Topology;
+import org.apache.kafka.streams.TopologyConfig;
+import org.qfleet.verdict.ProductCatalogue;
+
+/**
+ * The service's Kafka Streams topology: sweeps in, through {@link SweepProcessor}, to results and
+ * rejects. Stateless, so scale-out is more partitions and more instances.
+ */
+public final class SweepTopology {
+
+    static final String SOURCE = "sweeps";
+    static final String PROCESSOR = "fit";
+    static final String RESULTS_SINK = "results";
+    static final String REJECTS_SINK = "rejects";
+
+    private SweepTopology() {
+    }
+
+    public static Topology build(StreamSettings settings, ProductCatalogue catalogue) {
+        SweepHandler handler = new SweepHandler(settings, catalogue);
+        RejectJson rejects = new RejectJson(settings.maxRejectPayloadBytes());
+        Topology topology = new Topology(new TopologyConfig(new StreamsConfig(settings.streamsProperties())));
+        topology.addSource(SOURCE, new ByteArrayDeserializer(), new ByteArrayDeserializer(), settings.topics().sweeps());
+        topology.addProcessor(PROCESSOR, () -> new SweepProcessor(handler, rejects), SOURCE);
+        topology.addSink(RESULTS_SINK, settings.topics().results(), new ByteArraySerializer(), new ByteArraySerializer(), PROCESSOR);
+        topology.addSink(REJECTS_SINK, settings.topics().rejects(), new ByteArraySerializer(), new ByteArraySerializer(), PROCESSOR);
+        return topology;
+    }
+}
