@@ -86,8 +86,8 @@ public final class ResultJson {
 
     /** The message's identifying fields; files read from disk have none and write none. */
     private static void writeInfo(JsonGenerator g, SweepInfo info) throws IOException {
-        if (info == null || info.equals(SweepInfo.NONE)) {
-            return;
+        if (info == null || info == SweepInfo.NONE) {
+            return; // by identity: a record's equals is slow on first use, and absent fields are skipped anyway
         }
         optional(g, "sweepId", info.sweepId());
         optional(g, "stationId", info.stationId());

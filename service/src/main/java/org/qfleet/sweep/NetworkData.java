@@ -70,10 +70,14 @@ final class NetworkData {
         if (pending + count > recordSize) {
             throw wrongCount(pending == 0 ? count : pending);
         }
+        if (pending == 0 && count == recordSize) {
+            emit(values); // the usual case: a whole record on one line
+            return true;
+        }
         System.arraycopy(values, 0, record, pending, count);
         pending += count;
         if (pending == recordSize) {
-            emit();
+            emit(record);
             pending = 0;
         }
         return true;
@@ -102,20 +106,26 @@ final class NetworkData {
         return traces;
     }
 
-    private void emit() throws InvalidSweepException {
+    private void emit(double[] numbers) throws InvalidSweepException {
         if (frequencies.size() == declaredFrequencies) {
             throw new InvalidSweepException(SweepError.TOUCHSTONE_SYNTAX, "line " + recordLine
                     + ": more frequencies than the " + declaredFrequencies + " declared by [Number of Frequencies]");
         }
-        if (!frequencies.add(record[0] * options.unit().hertz())) {
+        if (!frequencies.add(numbers[0] * options.unit().hertz())) {
             throw new InvalidSweepException(SweepError.TOO_MANY_POINTS,
                     "line " + recordLine + ": more than " + maxPoints + " frequencies");
         }
-        previousFrequency = record[0];
+        previousFrequency = numbers[0];
+        TouchstoneFormat format = options.format();
         for (int k = 0; k < order.length; k++) {
-            options.format().toRectangular(record[1 + 2 * k], record[2 + 2 * k], reIm);
-            re[k].add(reIm[0]);
-            im[k].add(reIm[1]);
+            if (format == TouchstoneFormat.RI) {
+                re[k].add(numbers[1 + 2 * k]);
+                im[k].add(numbers[2 + 2 * k]);
+            } else {
+                format.toRectangular(numbers[1 + 2 * k], numbers[2 + 2 * k], reIm);
+                re[k].add(reIm[0]);
+                im[k].add(reIm[1]);
+            }
         }
     }
 

@@ -64,7 +64,7 @@ public final class SweepFiles {
 
     private ReadOutcome readTouchstone(Path file, String source, int ports) throws IOException {
         try (Reader text = new InputStreamReader(open(file), StandardCharsets.ISO_8859_1)) {
-            return ReadOutcome.of(touchstone.read(source, text, ports));
+            return ReadOutcome.of(touchstone.read(source, text, ports, Files.size(file)));
         } catch (InvalidSweepException e) {
             return ReadOutcome.failed(source, e);
         }

@@ -2,6 +2,7 @@ package org.qfleet.sweep;
 
 import java.util.Locale;
 import java.util.Optional;
+import java.util.regex.Pattern;
 
 /**
  * The option line of a Touchstone file, {@code # <unit> <parameter> <format> R <ohms>}, items in any
@@ -12,8 +13,10 @@ record TouchstoneOptions(FrequencyUnit unit, TouchstoneFormat format, double ref
 
     static final TouchstoneOptions DEFAULT = new TouchstoneOptions(FrequencyUnit.GHZ, TouchstoneFormat.MA, 50.0);
 
+    private static final Pattern BLANKS = Pattern.compile("\\s+");
+
     static TouchstoneOptions parse(String line, int lineNumber) throws InvalidSweepException {
-        String[] tokens = line.substring(1).trim().split("\\s+");
+        String[] tokens = BLANKS.split(line.substring(1).trim());
         FrequencyUnit unit = null;
         TouchstoneFormat format = null;
         Double reference = null;

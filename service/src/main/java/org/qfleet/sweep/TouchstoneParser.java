@@ -4,11 +4,12 @@ import java.io.IOException;
 import java.util.Locale;
 
 /**
- * Reads one Touchstone file line by line (the state of one {@link TouchstoneReader#read} call).
- * Follows the Touchstone File Format Specification, versions 1.1 (EIA/IBIS Open Forum, 2002) and
- * 2.0 (IBIS Open Forum, 2009), as recalled from memory: {@code !} starts a comment anywhere, the
- * option line starts with {@code #}, 2.0 keywords are in brackets and a 2.0 file starts with
- * [Version] 2.0. Noise data is checked for shape and otherwise ignored.
+ * Reads one Touchstone file line by line (the state of one {@link TouchstoneReader#read} call),
+ * data lines in place, without a String for each. Follows the Touchstone File Format
+ * Specification, versions 1.1 (EIA/IBIS Open Forum, 2002) and 2.0 (IBIS Open Forum, 2009), as
+ * recalled from memory: {@code !} starts a comment anywhere, the option line starts with {@code #},
+ * 2.0 keywords are in brackets and a 2.0 file starts with [Version] 2.0. Noise data is checked for
+ * shape and otherwise ignored.
  */
 final class TouchstoneParser {
 
@@ -42,29 +43,34 @@ final class TouchstoneParser {
 
     Sweep parse() throws IOException, InvalidSweepException {
         boolean first = true;
-        for (String raw = lines.next(); raw != null && section != Section.END; raw = lines.next()) {
-            String line = withoutComment(raw);
-            if (line.isEmpty()) {
+        while (lines.next()) {
+            if (section == Section.END) {
+                lines.end(); // the line after [End] is read, and refused when too long, as any line
+                break;
+            }
+            char[] text = lines.text();
+            int start = contentStart(text, lines.start(), lines.bound());
+            if (start == lines.bound() || isLineBreak(text[start]) || text[start] == '!') {
                 continue;
             }
             int number = lines.lineNumber();
             if (first) {
                 first = false;
-                if (keywordName(line).equalsIgnoreCase("version")) {
-                    version(line, number);
+                if (keywordName(text, start).equalsIgnoreCase("version")) {
+                    version(content(text, start), number);
                     continue;
                 }
             }
             if (section == Section.INFORMATION) {
-                if (keywordName(line).equalsIgnoreCase("end information")) {
+                if (keywordName(text, start).equalsIgnoreCase("end information")) {
                     section = Section.HEADER;
                 }
                 continue;
             }
-            switch (line.charAt(0)) {
-                case '#' -> optionLine(line, number);
-                case '[' -> keyword(line, number);
-                default -> data(line, number);
+            switch (text[start]) {
+                case '#' -> optionLine(content(text, start), number);
+                case '[' -> keyword(content(text, start), number);
+                default -> data(text, start, number);
             }
         }
         return finish();
@@ -145,8 +151,15 @@ final class TouchstoneParser {
         noiseStartLine = number;
     }
 
-    private void data(String line, int number) throws InvalidSweepException {
-        int count = numbers.parse(line, number);
+    private void data(char[] text, int start, int number) throws InvalidSweepException {
+        int count;
+        try {
+            count = numbers.parse(text, start, lines.bound(), number);
+        } catch (InvalidSweepException e) {
+            lines.end(); // a line too long is reported as such, whatever else is wrong with it
+            throw e;
+        }
+        lines.endFrom(numbers.stop());
         if (section == Section.HEADER) {
             if (version2 && keywords.expectsReferenceValues()) {
                 keywords.addReferenceValues(numbers.values(), count, number);
@@ -247,9 +260,38 @@ final class TouchstoneParser {
         return line.charAt(0) != '[' || close < 0 ? "" : line.substring(1, close).trim();
     }
 
-    private static String withoutComment(String raw) {
-        int bang = raw.indexOf('!');
-        return (bang < 0 ? raw : raw.substring(0, bang)).trim();
+    /** {@link #keywordName(String)} of the current line, whose content starts at {@code text[start]}. */
+    private String keywordName(char[] text, int start) throws InvalidSweepException {
+        return text[start] != '[' ? "" : keywordName(content(text, start));
+    }
+
+    /**
+     * The current line, whose content starts at {@code text[start]}, without its {@code !} comment
+     * and the blanks around (as String.trim).
+     */
+    private String content(char[] text, int start) throws InvalidSweepException {
+        int end = lines.end();
+        int stop = start;
+        while (stop < end && text[stop] != '!') {
+            stop++;
+        }
+        while (stop > start && text[stop - 1] <= ' ') {
+            stop--;
+        }
+        return new String(text, start, stop - start);
+    }
+
+    /** Where the line's content starts: after blanks, at its line break or at {@code bound}. */
+    private static int contentStart(char[] text, int start, int bound) {
+        int from = start;
+        while (from < bound && text[from] <= ' ' && !isLineBreak(text[from])) {
+            from++;
+        }
+        return from;
+    }
+
+    private static boolean isLineBreak(char c) {
+        return c == '\n' || c == '\r';
     }
 
     private static InvalidSweepException syntax(int line, String message) {

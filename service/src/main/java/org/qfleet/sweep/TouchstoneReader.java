@@ -32,11 +32,20 @@ public final class TouchstoneReader {
      * @throws InvalidSweepException when the text is not a usable sweep, or cannot be read
      */
     public Sweep read(String source, Reader text, int portsFromExtension) throws InvalidSweepException {
+        return read(source, text, portsFromExtension, -1);
+    }
+
+    /**
+     * Reads one file like {@link #read(String, Reader, int)}, given its length in characters (or -1
+     * when unknown), so that a file of ordinary size is read in one go.
+     */
+    Sweep read(String source, Reader text, int portsFromExtension, long length) throws InvalidSweepException {
         if (portsFromExtension < 0) {
             throw new IllegalArgumentException("portsFromExtension must be 0 (unknown) or more");
         }
+        TextLines lines = length < 0 ? new TextLines(text) : new TextLines(text, length);
         try {
-            return new TouchstoneParser(source, new TextLines(text), limits, portsFromExtension).parse();
+            return new TouchstoneParser(source, lines, limits, portsFromExtension).parse();
         } catch (IOException e) {
             throw new InvalidSweepException(SweepError.UNREADABLE, "cannot read " + source + ": " + e.getMessage(), e);
         }
