@@ -60,7 +60,7 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         double[] rs = every(re, stride);
         double[] is = every(im, stride);
         boolean transmission = topology == Topology.TRANSMISSION;
-        t = StartingPoint.refineDelay(xs, rs, is, x0, g, t, !transmission);
+        t = DelaySearch.refine(xs, rs, is, x0, g, t, !transmission);
         double[] a = StartingPoint.linearAmplitudes(xs, rs, is, x0, g, t, !transmission);
 
         if (!transmission) {
