@@ -25,13 +25,16 @@ public final class ErrorCodes {
 
     /** Every code an error line can carry. */
     public static List<String> all() {
+        return readerCodesAnd(FIT_FAILED, INTERNAL_ERROR, NO_SWEEPS);
+    }
+
+    /** The readers' codes ({@link SweepError}) followed by {@code more}. */
+    public static List<String> readerCodesAnd(String... more) {
         List<String> codes = new ArrayList<>();
         for (SweepError e : SweepError.values()) {
             codes.add(e.code());
         }
-        codes.add(FIT_FAILED);
-        codes.add(INTERNAL_ERROR);
-        codes.add(NO_SWEEPS);
+        codes.addAll(List.of(more));
         return Collections.unmodifiableList(codes);
     }
 }

@@ -85,6 +85,18 @@ final class CircleProblem implements LeastSquaresProblem {
     }
 
     private double costOnly(double[] p) {
+        return residuals(p, null);
+    }
+
+    /** |r|^2 at every point for parameters p, for the residual checks. */
+    double[] residualPower(double[] p) {
+        double[] out = new double[x.length];
+        residuals(p, out);
+        return out;
+    }
+
+    /** The sum of |r|^2, and each term into {@code out} when it is not null. */
+    private double residuals(double[] p, double[] out) {
         int o = background ? 2 : 0;
         double br = background ? p[0] : 0;
         double bi = background ? p[1] : 0;
@@ -98,10 +110,8 @@ final class CircleProblem implements LeastSquaresProblem {
         double g2 = g * g;
         double cost = 0;
         for (int k = 0; k < x.length; k++) {
-            double c = cos[k];
-            double s = sin[k];
-            double wr = c * zr[k] + s * zi[k];
-            double wi = c * zi[k] - s * zr[k];
+            double wr = cos[k] * zr[k] + sin[k] * zi[k];
+            double wi = cos[k] * zi[k] - sin[k] * zr[k];
             double u = x[k] - x0;
             double dd = 1 / (g2 + u * u);
             double lr = g2 * dd;
@@ -109,38 +119,15 @@ final class CircleProblem implements LeastSquaresProblem {
             double k1 = gain[k];
             double rr = wr - k1 * (br + ar * lr - ai * li);
             double ri = wi - k1 * (bi + ar * li + ai * lr);
-            cost += rr * rr + ri * ri;
+            double r2 = rr * rr + ri * ri;
+            cost += r2;
+            if (out != null) {
+                out[k] = r2;
+            }
         }
         return cost;
     }
 
-    /** |r|^2 at every point for parameters p, for the residual checks. */
-    double[] residualPower(double[] p) {
-        int o = background ? 2 : 0;
-        double br = background ? p[0] : 0;
-        double bi = background ? p[1] : 0;
-        double ar = p[o];
-        double ai = p[o + 1];
-        double x0 = p[o + 2];
-        double g = p[o + 3];
-        double slope = tilt ? p[o + 5] : 0;
-        Phasors.fill(p[o + 4], x, equallySpaced, cos, sin);
-        Phasors.fillGain(slope, x, equallySpaced, gain);
-        double[] out = new double[x.length];
-        for (int k = 0; k < x.length; k++) {
-            double wr = cos[k] * zr[k] + sin[k] * zi[k];
-            double wi = cos[k] * zi[k] - sin[k] * zr[k];
-            double u = x[k] - x0;
-            double dd = 1 / (g * g + u * u);
-            double lr = g * g * dd;
-            double li = -g * u * dd;
-            double k1 = gain[k];
-            double rr = wr - k1 * (br + ar * lr - ai * li);
-            double ri = wi - k1 * (bi + ar * li + ai * lr);
-            out[k] = rr * rr + ri * ri;
-        }
-        return out;
-    }
 
     private double plainKernel(double[] p, double[][] jtj, double[] jtr) {
         double cost = plainWithBackgroundScore(p, jtj, jtr, scoreJtj, scoreJtr);

@@ -1,7 +1,5 @@
 package org.qfleet.stream;
 
-import java.util.ArrayList;
-import java.util.Collections;
 import java.util.List;
 import org.qfleet.codec.ErrorCodes;
 import org.qfleet.sweep.SweepError;
@@ -24,13 +22,6 @@ public final class RejectCodes {
 
     /** Every code a reject can carry. */
     public static List<String> all() {
-        List<String> codes = new ArrayList<>();
-        for (SweepError e : SweepError.values()) {
-            codes.add(e.code());
-        }
-        codes.add(FIT_FAILED);
-        codes.add(INTERNAL_ERROR);
-        codes.add(OVERSIZED);
-        return Collections.unmodifiableList(codes);
+        return ErrorCodes.readerCodesAnd(FIT_FAILED, INTERNAL_ERROR, OVERSIZED);
     }
 }
