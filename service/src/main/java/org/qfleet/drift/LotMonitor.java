@@ -14,7 +14,8 @@ import java.util.TreeMap;
  * {@link LotStore}, so the same code runs in memory or on Kafka Streams state stores.
  *
  * <p>Deliberate choices: a retest replaces the unit's earlier value in the lot; a unit for a lot
- * closed by the quiet period is not added to it again (it still goes to its station's charts); the
+ * closed by the quiet period is not added to it again (its f0 and coupling still go to its station's
+ * charts); the
  * quiet period runs on event time (measuredAt): a lot closes when a unit of the same product stamped
  * more than the quiet period after the lot's latest unit arrives. The charts and the lot statistics
  * take units in arrival order, whatever their measuredAt.
@@ -117,29 +118,54 @@ public final class LotMonitor {
     }
 
     /**
-     * The unit's standardized deviations: from the mean of the same lot's units on other stations
-     * when there are at least {@code minReferenceUnits} of them (so a lot that is low everywhere does
-     * not move a station's charts), scaled by sigma0 sqrt(1 + 1/m) for a reference mean of m units;
-     * from the product baseline otherwise.
+     * The unit's standardized deviations. Qu is measured against the same lot's units on the other
+     * stations once they hold at least {@code minReferenceUnits} (so a lot that is low everywhere
+     * does not move a station's chart), and not charted before (the first units of a lot, and lots
+     * measured on one station only, which the lot-mean rule covers): the median of the other stations' means when there are
+     * three or more (so one faulty station does not drag the others' reference), else the mean of
+     * their means; the scale sigma0 sqrt(1 + var(reference)/sigma0^2) allows for the reference's own
+     * noise (the variance of a median of k means of n units taken as pi/2 sigma0^2/n, its
+     * large-sample value; common practice). f0 and the coupling level are fixture properties: they
+     * are measured against the product baseline, which a faulty station cannot move.
      */
     private StationInput stationInput(Measurement m, Baseline b, LotStatistics stats) {
         if (b == null || !m.trusted()) {
             return new StationInput(m.product(), m.station(), m.lot(), m.unit(), m.measuredAt(), m.trusted(),
                     Double.NaN, Double.NaN, Double.NaN, b);
         }
-        StationShare others = stats.others(m.station());
-        double qu = deviation(m.qUnloaded(), others.qu(), b.quMean(), b.quSigma());
-        double f0 = deviation(m.f0Hz(), others.f0(), b.f0MeanHz(), b.f0SigmaHz());
-        double level = deviation(m.levelDb(), others.level(), b.levelMeanDb(), b.levelSigmaDb());
+        double qu = quDeviation(m, b, stats);
+        double f0 = standardized(m.f0Hz(), b.f0MeanHz(), b.f0SigmaHz());
+        double level = standardized(m.levelDb(), b.levelMeanDb(), b.levelSigmaDb());
         return new StationInput(m.product(), m.station(), m.lot(), m.unit(), m.measuredAt(), true, qu, f0, level, b);
     }
 
-    private double deviation(double x, Welford reference, double mean, double sigma) {
-        if (!Double.isFinite(x) || !(sigma > 0) || !Double.isFinite(mean)) {
+    private double quDeviation(Measurement m, Baseline b, LotStatistics stats) {
+        List<Welford> others = new ArrayList<>();
+        long units = 0;
+        for (Map.Entry<String, StationShare> e : new TreeMap<>(stats.byStation()).entrySet()) {
+            if (!e.getKey().equals(m.station())) {
+                others.add(e.getValue().qu());
+                units += e.getValue().qu().n();
+            }
+        }
+        if (units < settings.minReferenceUnits()) {
             return Double.NaN;
         }
-        if (reference.n() >= settings.minReferenceUnits()) {
-            return (x - reference.mean()) / (sigma * Math.sqrt(1 + 1.0 / reference.n()));
+        double reference;
+        double relativeVariance;
+        if (others.size() >= 3) {
+            reference = RobustStats.median(others.stream().mapToDouble(Welford::mean).toArray());
+            relativeVariance = Math.PI / 2 * others.size() / units;
+        } else {
+            reference = others.stream().mapToDouble(Welford::mean).average().orElseThrow();
+            relativeVariance = others.stream().mapToDouble(w -> 1.0 / w.n()).sum() / (others.size() * others.size());
+        }
+        return (m.qUnloaded() - reference) / (b.quSigma() * Math.sqrt(1 + relativeVariance));
+    }
+
+    private static double standardized(double x, double mean, double sigma) {
+        if (!Double.isFinite(x) || !(sigma > 0) || !Double.isFinite(mean)) {
+            return Double.NaN;
         }
         return (x - mean) / sigma;
     }

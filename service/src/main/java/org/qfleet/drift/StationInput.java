@@ -10,7 +10,8 @@ package org.qfleet.drift;
  * @param unit      unit id
  * @param eventTime measuredAt, epoch milliseconds
  * @param trusted   false for units kept out of the statistics (flags); they are only counted
- * @param quDev     standardized Qu deviation, NaN when no baseline is known yet
+ * @param quDev     standardized Qu deviation, NaN when not charted (no baseline yet, or too few
+ *                  units of the lot on other stations)
  * @param f0Dev     standardized f0 deviation, NaN when not available
  * @param levelDev  standardized coupling-level deviation, NaN when not available
  * @param baseline  the product baseline, null while being learned

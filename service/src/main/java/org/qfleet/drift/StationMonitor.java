@@ -10,10 +10,10 @@ import java.util.Optional;
  * The station side of drift monitoring: an EWMA chart of the standardized Qu deviation
  * (lambda 0.2, L 2.962; Lucas & Saccucci 1990) and two-sided tabular CUSUMs (k = 0.5, h = 5;
  * Montgomery) of the standardized f0 and coupling-level deviations, which catch a fixture fault
- * before Qu moves. The deviations are taken from the same lot's units on the other stations
- * ({@link LotMonitor}), so a lot that is low on every station does not move any station's charts,
- * and a station that keeps deviating lot after lot is what the charts see: the alert carries its
- * deviation per recent lot as evidence. Charts take units in arrival order; a retest is one more
+ * before Qu moves. Qu deviations are taken from the same lot's units on the other stations, f0 and
+ * coupling deviations from the product baseline ({@link LotMonitor}), so a lot that is low on every
+ * station does not move any station's charts, and a station that keeps deviating lot after lot is
+ * what the charts see: the alert carries its Qu deviation per recent lot as evidence. Charts take units in arrival order; a retest is one more
  * measurement for the station. Stateless itself.
  */
 public final class StationMonitor {
@@ -35,13 +35,13 @@ public final class StationMonitor {
             return new Step(new StationState(s.product(), s.station(), s.qu(), s.f0(), s.level(), s.excluded() + 1,
                     s.recentLots(), s.alerts()), Optional.empty());
         }
-        if (Double.isNaN(in.quDev())) {
+        if (in.baseline() == null) {
             return new Step(s, Optional.empty());
         }
-        Ewma qu = s.qu().plus(in.quDev());
+        Ewma qu = Double.isFinite(in.quDev()) ? s.qu().plus(in.quDev()) : s.qu();
         Cusum f0 = Double.isFinite(in.f0Dev()) ? s.f0().plus(in.f0Dev()) : s.f0();
         Cusum level = Double.isFinite(in.levelDev()) ? s.level().plus(in.levelDev()) : s.level();
-        List<LotDeviation> lots = recentLots(s.recentLots(), in.lot(), in.quDev());
+        List<LotDeviation> lots = Double.isFinite(in.quDev()) ? recentLots(s.recentLots(), in.lot(), in.quDev()) : s.recentLots();
         StationState charted = new StationState(s.product(), s.station(), qu, f0, level, s.excluded(), lots, s.alerts());
         AlertTracker.Step step = s.alerts().observe(evidence(charted, in));
         return new Step(new StationState(s.product(), s.station(), qu, f0, level, s.excluded(), lots, step.tracker()),
