@@ -19,8 +19,9 @@ import org.apache.kafka.common.errors.WakeupException;
 import org.apache.kafka.common.serialization.ByteArrayDeserializer;
 
 /**
- * The demo's view of its own output: reads the results and rejects topics as any client would
- * ({@code read_committed}), and sums them up for a person every few seconds: rates, counts,
+ * The demo's view of its own output: reads the results, rejects and alerts topics as any client
+ * would ({@code read_committed}), prints each alert as it comes, and sums the rest up for a person
+ * every few seconds: rates, counts,
  * end-to-end latency (from the sweep's publication to its committed result), open lots, verdicts
  * and the latest unit of each station.
  */
@@ -32,6 +33,8 @@ final class DemoConsole implements Runnable, AutoCloseable {
 
     private final KafkaConsumer<byte[], byte[]> consumer;
     private final String resultsTopic;
+    private final String alertsTopic;
+    private final PrintWriter alertsOut;
     private final LatencyRecorder recentLatency = new LatencyRecorder(20_000);
     private final LatencyRecorder allLatency = new LatencyRecorder(200_000);
     private final Map<String, String> latestByStation = new TreeMap<>();
@@ -40,7 +43,8 @@ final class DemoConsole implements Runnable, AutoCloseable {
     private long results;
     private long rejects;
 
-    DemoConsole(Map<String, Object> kafka, String resultsTopic, String rejectsTopic) {
+    /** @param alertsOut where each alert is printed as it arrives */
+    DemoConsole(Map<String, Object> kafka, String resultsTopic, String rejectsTopic, String alertsTopic, PrintWriter alertsOut) {
         Map<String, Object> config = new HashMap<>(kafka);
         config.put(ConsumerConfig.GROUP_ID_CONFIG, "qfleet-demo-console-" + UUID.randomUUID());
         config.put(ConsumerConfig.AUTO_OFFSET_RESET_CONFIG, "latest");
@@ -48,7 +52,9 @@ final class DemoConsole implements Runnable, AutoCloseable {
         config.put(ConsumerConfig.ENABLE_AUTO_COMMIT_CONFIG, "false");
         this.consumer = new KafkaConsumer<>(config, new ByteArrayDeserializer(), new ByteArrayDeserializer());
         this.resultsTopic = resultsTopic;
-        consumer.subscribe(List.of(resultsTopic, rejectsTopic));
+        this.alertsTopic = alertsTopic;
+        this.alertsOut = alertsOut;
+        consumer.subscribe(List.of(resultsTopic, rejectsTopic, alertsTopic));
     }
 
     /** Waits until the consumer has its partitions, so nothing published afterwards is missed. */
@@ -78,6 +84,10 @@ final class DemoConsole implements Runnable, AutoCloseable {
         long now = System.currentTimeMillis();
         synchronized (this) {
             for (ConsumerRecord<byte[], byte[]> r : batch) {
+                if (r.topic().equals(alertsTopic)) {
+                    alert(r.value());
+                    continue;
+                }
                 recentLatency.add(now - r.timestamp());
                 allLatency.add(now - r.timestamp());
                 if (r.topic().equals(resultsTopic)) {
@@ -100,6 +110,34 @@ final class DemoConsole implements Runnable, AutoCloseable {
                     n.path("stationId").asText(), n.path("unit").asText(), n.path("qUnloaded").asDouble(), verdict));
         } catch (IOException e) {
             verdicts.merge("unreadable", 1L, Long::sum);
+        }
+    }
+
+    private void alert(byte[] value) {
+        String line;
+        try {
+            JsonNode a = MAPPER.readTree(value);
+            List<String> rules = new ArrayList<>();
+            a.path("rules").forEach(r -> rules.add(r.asText()));
+            JsonNode f = a.path("figures");
+            String status = a.path("status").asText() + (a.path("revision").asInt() > 1 && "raised".equals(a.path("status").asText())
+                    ? " (updated)" : "");
+            line = String.format(Locale.ROOT, "ALERT %s %s %s: %s, %s, n %d%s%s", a.path("kind").asText().toUpperCase(Locale.ROOT),
+                    a.path("subject").asText(), status, a.path("severity").asText(), String.join(" + ", rules),
+                    f.path("n").asLong(), f.hasNonNull("mean") ? String.format(Locale.ROOT, ", lot mean Qu %.0f", f.path("mean").asDouble()) : "",
+                    a.hasNonNull("clearedBy") ? ", " + a.path("clearedBy").asText() : "");
+        } catch (IOException e) {
+            line = "ALERT (unreadable)";
+        }
+        alertsOut.println("qfleet demo: " + line + "   [key " + keyOf(value) + "]");
+        alertsOut.flush();
+    }
+
+    private static String keyOf(byte[] value) {
+        try {
+            return MAPPER.readTree(value).path("key").asText("?");
+        } catch (IOException e) {
+            return "?";
         }
     }
 

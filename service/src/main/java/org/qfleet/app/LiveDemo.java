@@ -49,7 +49,7 @@ final class LiveDemo implements RunCommand.WhileRunning {
         StreamSettings s = runner.settings();
         DemoPlant plant = new DemoPlant(seed, Clock.systemUTC());
         AtomicBoolean stopPublishing = new AtomicBoolean();
-        DemoConsole console = new DemoConsole(s.clientProperties(), s.topics().results(), s.topics().rejects());
+        DemoConsole console = new DemoConsole(s.clientProperties(), s.topics().results(), s.topics().rejects(), s.topics().alerts(), err);
         console.awaitAssignment(Duration.ofSeconds(30));
         Thread reader = new Thread(console, "qfleet-demo-console");
         reader.start();

@@ -101,7 +101,7 @@ final class ServiceRunner implements AutoCloseable {
                 ? settings.bootstrapServers() + " (embedded broker, data in " + broker.dataDir() + ")"
                 : settings.bootstrapServers();
         return prefix + "ready: reading " + settings.topics().sweeps() + " on " + where + ", writing "
-                + settings.topics().results() + " and " + settings.topics().rejects()
+                + settings.topics().results() + ", " + settings.topics().rejects() + " and " + settings.topics().alerts()
                 + " (application id " + settings.applicationId() + "); stop with Ctrl-C";
     }
 

@@ -5,6 +5,7 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import org.apache.kafka.streams.KafkaStreams;
 import org.apache.kafka.streams.errors.StreamsUncaughtExceptionHandler.StreamThreadExceptionResponse;
+import org.qfleet.drift.DriftSettings;
 import org.qfleet.verdict.ProductCatalogue;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -28,7 +29,12 @@ public final class StreamService implements AutoCloseable {
 
     /** Builds the topology and starts processing. */
     public static StreamService start(StreamSettings settings, ProductCatalogue catalogue) {
-        KafkaStreams streams = new KafkaStreams(SweepTopology.build(settings, catalogue), settings.streamsProperties());
+        return start(settings, catalogue, DriftSettings.DEFAULT);
+    }
+
+    /** Builds the topology with the given drift settings and starts processing. */
+    public static StreamService start(StreamSettings settings, ProductCatalogue catalogue, DriftSettings drift) {
+        KafkaStreams streams = new KafkaStreams(SweepTopology.build(settings, catalogue, drift), settings.streamsProperties());
         StreamService service = new StreamService(streams);
         streams.setStateListener((now, before) -> {
             if (now == KafkaStreams.State.RUNNING) {

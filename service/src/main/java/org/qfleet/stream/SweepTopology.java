@@ -2,14 +2,17 @@ package org.qfleet.stream;
 
 import org.apache.kafka.common.serialization.ByteArrayDeserializer;
 import org.apache.kafka.common.serialization.ByteArraySerializer;
+import org.apache.kafka.streams.StreamsBuilder;
 import org.apache.kafka.streams.StreamsConfig;
 import org.apache.kafka.streams.Topology;
 import org.apache.kafka.streams.TopologyConfig;
+import org.qfleet.drift.DriftSettings;
 import org.qfleet.verdict.ProductCatalogue;
 
 /**
  * The service's Kafka Streams topology: sweeps in, through {@link SweepProcessor}, to results and
- * rejects. Stateless, so scale-out is more partitions and more instances.
+ * rejects (stateless, so scale-out is more partitions and more instances); results on to the drift
+ * monitors and alerts ({@link DriftTopology}).
  */
 public final class SweepTopology {
 
@@ -22,9 +25,16 @@ public final class SweepTopology {
     }
 
     public static Topology build(StreamSettings settings, ProductCatalogue catalogue) {
+        return build(settings, catalogue, DriftSettings.DEFAULT);
+    }
+
+    /** The whole topology: fitting (stateless) and drift monitoring ({@link DriftTopology}). */
+    public static Topology build(StreamSettings settings, ProductCatalogue catalogue, DriftSettings drift) {
         SweepHandler handler = new SweepHandler(settings, catalogue);
         RejectJson rejects = new RejectJson(settings.maxRejectPayloadBytes());
-        Topology topology = new Topology(new TopologyConfig(new StreamsConfig(settings.streamsProperties())));
+        StreamsBuilder builder = new StreamsBuilder(new TopologyConfig(new StreamsConfig(settings.streamsProperties())));
+        DriftTopology.add(builder, settings.topics(), DriftTopology.withCatalogue(drift, catalogue));
+        Topology topology = builder.build();
         topology.addSource(SOURCE, new ByteArrayDeserializer(), new ByteArrayDeserializer(), settings.topics().sweeps());
         topology.addProcessor(PROCESSOR, () -> new SweepProcessor(handler, rejects), SOURCE);
         topology.addSink(RESULTS_SINK, settings.topics().results(), new ByteArraySerializer(), new ByteArraySerializer(), PROCESSOR);

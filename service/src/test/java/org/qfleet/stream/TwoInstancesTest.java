@@ -21,6 +21,11 @@ class TwoInstancesTest {
 
     private static final int SWEEPS = 300;
     private static final Duration WAIT = Duration.ofSeconds(90);
+    /**
+     * Tasks of the topology on six-partition topics: fitting, reading the results back, the lot
+     * stage and the station stage, six each (the repartition topics take the results' partitions).
+     */
+    private static final int TASKS = 4 * 6;
 
     @Test
     void theRemainingInstanceFinishesTheWorkOfTheOneThatStopped() throws Exception {
@@ -32,10 +37,10 @@ class TwoInstancesTest {
         List<StreamSweeps.Message> sweeps = StreamSweeps.mixed(SWEEPS, 33, "pair-" + UUID.randomUUID());
         Set<String> ids = sweeps.stream().map(StreamSweeps.Message::sweepId).collect(Collectors.toSet());
 
-        try (StreamService one = StreamService.start(settings, ProductCatalogue.demoPlant());
-             StreamService two = StreamService.start(settings, ProductCatalogue.demoPlant())) {
+        try (StreamService one = StreamService.start(withStateDir(settings, "one"), ProductCatalogue.demoPlant());
+             StreamService two = StreamService.start(withStateDir(settings, "two"), ProductCatalogue.demoPlant())) {
             awaitShared(one, two);
-            assertThat(one.activeTasks() + two.activeTasks()).isEqualTo(6);
+            assertThat(one.activeTasks() + two.activeTasks()).isEqualTo(TASKS);
 
             CrashRecoveryTest.publish(bootstrap, topics.sweeps(), sweeps);
             TopicReader.read(bootstrap, topics.results(), SWEEPS / 10, WAIT);
@@ -44,7 +49,7 @@ class TwoInstancesTest {
             TopicReader.readUntil(bootstrap, topics.results(),
                     m -> m.stream().map(r -> r.value().get("sweepId").asText()).collect(Collectors.toSet()).containsAll(ids),
                     WAIT, "a result for each of " + SWEEPS + " sweeps");
-            assertThat(two.activeTasks()).isEqualTo(6);
+            assertThat(two.activeTasks()).isEqualTo(TASKS);
         }
         Map<String, Integer> resultsPerSweep = new HashMap<>();
         for (TopicReader.Message m : TopicReader.readAll(bootstrap, topics.results(), WAIT)) {
@@ -54,12 +59,20 @@ class TwoInstancesTest {
         assertThat(resultsPerSweep.values()).allMatch(n -> n == 1);
     }
 
+    /** Each instance keeps its drift state in a folder of its own, as two machines would. */
+    private static StreamSettings withStateDir(StreamSettings settings, String name) throws java.io.IOException {
+        Map<String, String> kafka = new HashMap<>(settings.kafka());
+        kafka.put("state.dir", java.nio.file.Files.createTempDirectory(java.nio.file.Files.createDirectories(
+                java.nio.file.Paths.get("target", "test-state")), name + "-").toString());
+        return settings.withKafka(kafka);
+    }
+
     /** Waits until both instances run and each has some of the partitions. */
     private static void awaitShared(StreamService one, StreamService two) throws InterruptedException {
         long deadline = System.nanoTime() + WAIT.toNanos();
         while (System.nanoTime() < deadline) {
             if (one.awaitRunning(Duration.ofMillis(100)) && two.awaitRunning(Duration.ofMillis(100))
-                    && one.activeTasks() > 0 && two.activeTasks() > 0 && one.activeTasks() + two.activeTasks() == 6) {
+                    && one.activeTasks() > 0 && two.activeTasks() > 0 && one.activeTasks() + two.activeTasks() == TASKS) {
                 return;
             }
             Thread.sleep(100);

@@ -1,0 +1,31 @@
+package org.qfleet.drift;
+
+/** A rule that can raise or update an alert. */
+public enum Rule {
+    /** Lot mean below mu0 - 3 sigma0 / sqrt(n). */
+    LOT_MEAN_BELOW_XBAR_LIMIT("lot-mean-below-xbar-limit", AlertKind.LOT),
+    /** Lot mean below the product's lot limit. */
+    LOT_MEAN_BELOW_LOT_LIMIT("lot-mean-below-lot-limit", AlertKind.LOT),
+    /** EWMA of the station's standardized Qu beyond its limit. */
+    QU_EWMA("qu-ewma", AlertKind.STATION),
+    /** CUSUM of the station's standardized f0 beyond h. */
+    F0_CUSUM("f0-cusum", AlertKind.STATION),
+    /** CUSUM of the station's standardized coupling level beyond h. */
+    COUPLING_CUSUM("coupling-cusum", AlertKind.STATION);
+
+    private final String code;
+    private final AlertKind kind;
+
+    Rule(String code, AlertKind kind) {
+        this.code = code;
+        this.kind = kind;
+    }
+
+    public String code() {
+        return code;
+    }
+
+    public AlertKind kind() {
+        return kind;
+    }
+}

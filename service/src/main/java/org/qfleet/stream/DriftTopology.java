@@ -1,0 +1,69 @@
+package org.qfleet.stream;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.apache.kafka.common.serialization.Serdes;
+import org.apache.kafka.streams.KeyValue;
+import org.apache.kafka.streams.StreamsBuilder;
+import org.apache.kafka.streams.kstream.Consumed;
+import org.apache.kafka.streams.kstream.KStream;
+import org.apache.kafka.streams.kstream.Produced;
+import org.apache.kafka.streams.kstream.Repartitioned;
+import org.apache.kafka.streams.state.Stores;
+import org.qfleet.drift.DriftSettings;
+import org.qfleet.drift.LotMonitor;
+import org.qfleet.drift.Measurement;
+import org.qfleet.drift.StationMonitor;
+import org.qfleet.verdict.ProductCatalogue;
+import org.qfleet.verdict.ProductLimits;
+
+/**
+ * The drift part of the topology: results are read back from the results topic, repartitioned by
+ * product to the lot stage (product baseline and the product's lots: the baseline is learned from
+ * units of all lots and stations, so it lives with them), whose station inputs are repartitioned
+ * by product/station to the station stage. Both stages keep their state in persistent key-value
+ * stores with changelog topics, under the service's exactly-once processing, so a restart resumes
+ * with the same statistics and alert states. Alerts go to the alerts topic keyed by alert key.
+ */
+final class DriftTopology {
+
+    static final String PRODUCTS_STORE = "drift-products";
+    static final String LOTS_STORE = "drift-lots";
+    static final String STATIONS_STORE = "drift-stations";
+
+    private DriftTopology() {
+    }
+
+    /** The lot limit of each product is the catalogue's lower limit on Qu. */
+    static DriftSettings withCatalogue(DriftSettings drift, ProductCatalogue catalogue) {
+        Map<String, Double> limits = new java.util.HashMap<>(drift.lotLimits());
+        for (ProductLimits l : catalogue.all()) {
+            if (l.qUnloadedMin() != null) {
+                limits.putIfAbsent(l.product(), l.qUnloadedMin());
+            }
+        }
+        return drift.withLotLimits(limits);
+    }
+
+    static void add(StreamsBuilder builder, Topics topics, DriftSettings drift) {
+        LotMonitor lotMonitor = new LotMonitor(drift);
+        StationMonitor stationMonitor = new StationMonitor(drift);
+        builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(PRODUCTS_STORE), Serdes.String(), Serdes.ByteArray()));
+        builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(LOTS_STORE), Serdes.String(), Serdes.ByteArray()));
+        builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(STATIONS_STORE), Serdes.String(), Serdes.ByteArray()));
+        KStream<String, byte[]> lotOut = builder.stream(topics.results(), Consumed.with(Serdes.ByteArray(), Serdes.ByteArray()))
+                .flatMap((key, value) -> {
+                    Optional<Measurement> m = value == null ? Optional.empty() : DriftJson.measurement(value);
+                    return m.map(x -> List.of(KeyValue.pair(x.product(), DriftJson.write(x)))).orElse(List.of());
+                })
+                .repartition(Repartitioned.with(Serdes.String(), Serdes.ByteArray()).withName("drift-by-product"))
+                .process(() -> new LotStageProcessor(lotMonitor), PRODUCTS_STORE, LOTS_STORE);
+        lotOut.filter((k, v) -> DriftRecords.isAlert(v)).mapValues(DriftRecords::untagged)
+                .to(topics.alerts(), Produced.with(Serdes.String(), Serdes.ByteArray()));
+        lotOut.filter((k, v) -> DriftRecords.isStationInput(v)).mapValues(DriftRecords::untagged)
+                .repartition(Repartitioned.with(Serdes.String(), Serdes.ByteArray()).withName("drift-by-station"))
+                .process(() -> new StationStageProcessor(stationMonitor), STATIONS_STORE)
+                .to(topics.alerts(), Produced.with(Serdes.String(), Serdes.ByteArray()));
+    }
+}

@@ -1,0 +1,63 @@
+package org.qfleet.stream;
+
+import org.apache.kafka.streams.processor.api.ContextualProcessor;
+import org.apache.kafka.streams.processor.api.ProcessorContext;
+import org.apache.kafka.streams.processor.api.Record;
+import org.apache.kafka.streams.state.KeyValueStore;
+import org.qfleet.drift.Alert;
+import org.qfleet.drift.LotMonitor;
+import org.qfleet.drift.LotState;
+import org.qfleet.drift.Measurement;
+import org.qfleet.drift.ProductState;
+
+/**
+ * The lot stage, on measurements keyed by product: {@link LotMonitor} with the product states and
+ * the lot states in changelogged stores. Forwards alert messages (keyed by alert key) and station
+ * inputs (keyed by product/station), told apart by {@link DriftRecords}.
+ */
+final class LotStageProcessor extends ContextualProcessor<String, byte[], String, byte[]> {
+
+    private final LotMonitor monitor;
+    private final AlertJson alertJson = new AlertJson();
+    private KeyValueStore<String, byte[]> products;
+    private KeyValueStore<String, byte[]> lots;
+
+    LotStageProcessor(LotMonitor monitor) {
+        this.monitor = monitor;
+    }
+
+    @Override
+    public void init(ProcessorContext<String, byte[]> context) {
+        super.init(context);
+        products = context.getStateStore(DriftTopology.PRODUCTS_STORE);
+        lots = context.getStateStore(DriftTopology.LOTS_STORE);
+    }
+
+    @Override
+    public void process(Record<String, byte[]> record) {
+        Measurement m = DriftJson.read(record.value(), Measurement.class);
+        ProductState before = DriftJson.read(products.get(m.product()), ProductState.class);
+        LotMonitor.Outcome outcome = monitor.accept(before, m, new LotMonitor.LotStore() {
+            @Override
+            public LotState get(String product, String lot) {
+                return DriftJson.read(lots.get(product + "/" + lot), LotState.class);
+            }
+
+            @Override
+            public void put(LotState state) {
+                lots.put(state.product() + "/" + state.lot(), DriftJson.write(state));
+            }
+
+            @Override
+            public void delete(String product, String lot) {
+                lots.delete(product + "/" + lot);
+            }
+        });
+        products.put(m.product(), DriftJson.write(outcome.product()));
+        for (Alert a : outcome.alerts()) {
+            context().forward(record.withKey(a.key()).withValue(DriftRecords.alert(alertJson.write(a))));
+        }
+        String stationKey = m.product() + "/" + m.station();
+        context().forward(record.withKey(stationKey).withValue(DriftRecords.stationInput(DriftJson.write(outcome.forward()))));
+    }
+}

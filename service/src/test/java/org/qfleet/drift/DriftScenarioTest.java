@@ -1,0 +1,152 @@
+package org.qfleet.drift;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Predicate;
+import org.junit.jupiter.api.Test;
+
+/** Plant scenarios through both monitors: attribution, one alert per cause, clearing, false alerts. */
+class DriftScenarioTest {
+
+    private final DriftEngine engine = new DriftEngine(PlantValues.settings());
+    private final List<Alert> alerts = new ArrayList<>();
+
+    @Test
+    void aLotThreePercentLowIsALotAlertWithinAFewDozenUnits() {
+        PlantValues plant = new PlantValues(11, 4);
+        feed(plant.lot("L1", 200, 1.0));
+        List<Measurement> low = plant.lot("L2", 200, 0.97);
+        int firstAlertAt = -1;
+        for (int i = 0; i < low.size(); i++) {
+            if (!engine.accept(low.get(i)).stream().filter(isRaised(AlertKind.LOT)).toList().isEmpty() && firstAlertAt < 0) {
+                firstAlertAt = i + 1;
+            }
+        }
+        assertThat(firstAlertAt).as("units of the low lot before its alert").isBetween(10, 36);
+        feedAndCollect(plant.lot("L3", 100, 1.0));
+        List<Alert> raised = alerts.stream().filter(a -> a.status() == AlertStatus.RAISED && a.revision() == 1).toList();
+        assertThat(raised).as("no station is blamed for a lot that is low everywhere").noneMatch(a -> a.kind() == AlertKind.STATION);
+    }
+
+    @Test
+    void aDegradingFixtureIsAStationAlertNotALotAlert() {
+        PlantValues plant = new PlantValues(12, 4);
+        feedAndCollect(plant.lot("L1", 200, 1.0));
+        feedAndCollect(plant.lot("L2", 200, 1.0, "st-03", PlantValues.Fault.LOOSE_CONNECTOR));
+        List<Alert> raised = raisedEpisodes();
+        assertThat(raised).anySatisfy(a -> {
+            assertThat(a.kind()).isEqualTo(AlertKind.STATION);
+            assertThat(a.subject()).isEqualTo("st-03");
+            assertThat(a.rules()).contains(Rule.COUPLING_CUSUM);
+            assertThat(a.breakdown()).extracting(Breakdown::id).contains("L2");
+        });
+        assertThat(raised).noneMatch(a -> a.kind() == AlertKind.LOT);
+    }
+
+    @Test
+    void aStationReadingQuLowInsideAHealthyLotIsNotBlamedOnTheLot() {
+        PlantValues plant = new PlantValues(13, 4);
+        feedAndCollect(plant.lot("L1", 200, 1.0));
+        feedAndCollect(plant.lot("L2", 200, 1.0, "st-02", new PlantValues.Fault(-2 * PlantValues.QU_SIGMA, 0, 0)));
+        List<Alert> raised = raisedEpisodes();
+        assertThat(raised).noneMatch(a -> a.kind() == AlertKind.LOT);
+        assertThat(raised).anySatisfy(a -> {
+            assertThat(a.subject()).isEqualTo("st-02");
+            assertThat(a.rules()).contains(Rule.QU_EWMA);
+        });
+    }
+
+    @Test
+    void aSecondRuleUpdatesTheOpenAlertInsteadOfRaisingAnother() {
+        PlantValues plant = new PlantValues(14, 4);
+        feedAndCollect(plant.lot("L1", 100, 1.0));
+        // the bath tires in two steps: 2.5 % low first (an X-bar signal), then 7 % (below the lot limit)
+        feedAndCollect(plant.lot("L2", 60, 0.975));
+        feedAndCollect(plant.lot("L2", 100, 0.93).stream().map(m -> new Measurement(m.product(), m.lot(), m.station(),
+                m.unit() + "-b", m.measuredAt(), m.qUnloaded(), m.f0Hz(), m.levelDb(), m.flags())).toList());
+        List<Alert> lotMessages = alerts.stream().filter(a -> a.kind() == AlertKind.LOT).toList();
+        assertThat(lotMessages).extracting(Alert::key).containsOnly("lot/" + PlantValues.PRODUCT + "/L2/1");
+        assertThat(lotMessages.get(0).rules()).containsExactly(Rule.LOT_MEAN_BELOW_XBAR_LIMIT);
+        assertThat(lotMessages.get(0).severity()).isEqualTo(Severity.WARNING);
+        Alert last = lotMessages.get(lotMessages.size() - 1);
+        assertThat(last.status()).isEqualTo(AlertStatus.RAISED);
+        assertThat(last.rules()).containsExactly(Rule.LOT_MEAN_BELOW_XBAR_LIMIT, Rule.LOT_MEAN_BELOW_LOT_LIMIT);
+        assertThat(last.severity()).isEqualTo(Severity.CRITICAL);
+        assertThat(lotMessages).extracting(Alert::revision).containsExactly(1, 2);
+        assertThat(last.figures().get("n")).isGreaterThanOrEqualTo(10);
+        assertThat(last.breakdown()).hasSize(4);
+        assertThat(last.baseline()).isEqualTo(PlantValues.baseline());
+    }
+
+    @Test
+    void aLotAlertClearsWhenTheLotClosesAfterTheQuietPeriod() {
+        PlantValues plant = new PlantValues(15, 4);
+        feedAndCollect(plant.lot("L1", 200, 0.97));
+        plant.pause(Duration.ofHours(1).toMinutes());
+        feedAndCollect(plant.lot("L2", 20, 1.0));
+        List<Alert> l1 = alerts.stream().filter(a -> a.subject().equals("L1")).toList();
+        assertThat(l1).isNotEmpty();
+        Alert last = l1.get(l1.size() - 1);
+        assertThat(last.status()).isEqualTo(AlertStatus.CLEARED);
+        assertThat(last.clearedBy()).isEqualTo(Alert.LOT_CLOSED);
+        assertThat(last.key()).isEqualTo(l1.get(0).key());
+        assertThat(engine.get(PlantValues.PRODUCT, "L1")).isNull();
+        assertThat(engine.product(PlantValues.PRODUCT).closedLots()).contains("L1");
+    }
+
+    @Test
+    void aRepairedStationClearsItsAlertAndALaterFaultIsANewEpisode() {
+        PlantValues plant = new PlantValues(16, 4);
+        PlantValues.Fault bad = new PlantValues.Fault(0, 0, 3);
+        feedAndCollect(plant.lot("L1", 200, 1.0, "st-01", bad));
+        feedAndCollect(plant.lot("L2", 200, 1.0));
+        feedAndCollect(plant.lot("L3", 200, 1.0, "st-01", bad));
+        List<Alert> st1 = alerts.stream().filter(a -> a.subject().equals("st-01")).toList();
+        assertThat(st1).extracting(Alert::status).containsSubsequence(AlertStatus.RAISED, AlertStatus.CLEARED, AlertStatus.RAISED);
+        Alert cleared = st1.stream().filter(a -> a.status() == AlertStatus.CLEARED).findFirst().orElseThrow();
+        assertThat(cleared.clearedBy()).isEqualTo(Alert.RECOVERED);
+        assertThat(cleared.key()).isEqualTo("station/" + PlantValues.PRODUCT + "/st-01/1");
+        assertThat(st1.get(st1.size() - 1).episode()).isGreaterThanOrEqualTo(2);
+    }
+
+    /**
+     * 5,000 in-control units: each station's three charts signal falsely about once per
+     * 1 / (1/500 + 2/465) = 159 charted units by design (two-sided ARLs of the EWMA and of two
+     * CUSUMs, Lucas & Saccucci 1990 and Montgomery), so 5,000 units may give about 31 station
+     * episodes; the test allows that expectation plus three Poisson standard deviations. Lots
+     * apply a 3-sigma limit to a growing mean after every unit; at most one lot in ten may cross it.
+     */
+    @Test
+    void inControlUnitsRaiseNoMoreFalseAlertsThanTheDesignedRunLengthsAllow() {
+        PlantValues plant = new PlantValues(17, 8);
+        for (int lot = 1; lot <= 25; lot++) {
+            feedAndCollect(plant.lot("L" + lot, 200, 1.0));
+        }
+        double expectedStation = 5000 * (1 / 500.0 + 2 / 465.0);
+        long station = raisedEpisodes().stream().filter(a -> a.kind() == AlertKind.STATION).count();
+        long lot = raisedEpisodes().stream().filter(a -> a.kind() == AlertKind.LOT).count();
+        System.out.printf("5000 in-control units: %d station episodes (designed about %.1f), %d lot episodes in 25 lots%n",
+                station, expectedStation, lot);
+        assertThat(station).isLessThanOrEqualTo(Math.round(expectedStation + 3 * Math.sqrt(expectedStation)));
+        assertThat(lot).isLessThanOrEqualTo(2);
+    }
+
+    private static Predicate<Alert> isRaised(AlertKind kind) {
+        return a -> a.kind() == kind && a.status() == AlertStatus.RAISED && a.revision() == 1;
+    }
+
+    private List<Alert> raisedEpisodes() {
+        return alerts.stream().filter(a -> a.status() == AlertStatus.RAISED && a.revision() == 1).toList();
+    }
+
+    private void feed(List<Measurement> units) {
+        units.forEach(engine::accept);
+    }
+
+    private void feedAndCollect(List<Measurement> units) {
+        units.forEach(m -> alerts.addAll(engine.accept(m)));
+    }
+}
