@@ -40,6 +40,8 @@ record ServiceConfig(
         Path productsFile) {
 
     static final String BOOTSTRAP_SERVERS = "bootstrap.servers";
+    /** Kafka Streams' setting for where it keeps its local state. */
+    static final String STREAMS_STATE_DIR = "state.dir";
     static final String APPLICATION_ID = "application.id";
     static final String THREADS = "threads";
     static final String TOPIC_SWEEPS = "topic.sweeps";
@@ -89,6 +91,11 @@ record ServiceConfig(
         if (bootstrap != null) {
             kafka.put(BOOTSTRAP_SERVERS, bootstrap);
         }
+        Path dataDir = Path.of(r.text(DATA_DIR, DEFAULT_DATA_DIR));
+        // Kafka Streams' own default is a folder under the OS temp directory, shared by every run on the
+        // machine: a state left there by an earlier broker looks corrupted to the next one. Keep the
+        // state next to the broker's data, so that both start clean or resume together.
+        kafka.putIfAbsent(STREAMS_STATE_DIR, dataDir.resolve("streams").toAbsolutePath().normalize().toString());
         Topics topics;
         try {
             topics = new Topics(r.text(TOPIC_SWEEPS, Topics.DEFAULT.sweeps()), r.text(TOPIC_RESULTS, Topics.DEFAULT.results()),
@@ -116,7 +123,7 @@ record ServiceConfig(
                 ? Optional.of((short) r.integer(REPLICATION_FACTOR, 1, 1))
                 : embedded ? Optional.of((short) 1) : Optional.empty();
         String products = r.text(PRODUCTS_FILE, null);
-        return new ServiceConfig(stream, embedded, port, Path.of(r.text(DATA_DIR, DEFAULT_DATA_DIR)),
+        return new ServiceConfig(stream, embedded, port, dataDir,
                 r.flag(CLEAN_START), embedded || r.flag(CREATE_TOPICS), partitions, 1, replication,
                 products == null || products.isBlank() ? null : Path.of(products));
     }

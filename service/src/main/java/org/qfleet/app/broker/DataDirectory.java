@@ -26,7 +26,9 @@ public final class DataDirectory {
         try (var entries = Files.list(dir)) {
             empty = entries.findAny().isEmpty();
         }
-        if (!empty && !Files.exists(dir.resolve("meta.properties"))) {
+        boolean brokerData = Files.exists(dir.resolve(EmbeddedBroker.LOG_FOLDER).resolve("meta.properties"))
+                || Files.exists(dir.resolve("meta.properties"));
+        if (!empty && !brokerData) {
             throw new IOException("refusing to wipe " + dir + ": it holds files but no broker data (no meta.properties)");
         }
         Files.walkFileTree(dir, new SimpleFileVisitor<>() {

@@ -38,6 +38,9 @@ public final class EmbeddedBroker implements AutoCloseable {
     private static final Duration READY_TIMEOUT = Duration.ofSeconds(60);
 
     private final KafkaRaftServer server;
+    /** Folder inside the data directory that holds the broker's logs and metadata. */
+    public static final String LOG_FOLDER = "broker";
+
     private final Path dataDir;
     private final int port;
     private boolean closed;
@@ -71,8 +74,16 @@ public final class EmbeddedBroker implements AutoCloseable {
         } catch (IOException e) {
             throw new BrokerException("cannot prepare the broker's data directory " + dir + ": " + e.getMessage(), e);
         }
-        Properties config = config(dir, clientPort, controllerPort);
-        format(dir);
+        // The broker's logs go one level down, so that the service's other local data (Kafka Streams
+        // state) can live beside them without the broker taking its folder for a partition.
+        Path logs = dir.resolve(LOG_FOLDER);
+        try {
+            Files.createDirectories(logs);
+        } catch (IOException e) {
+            throw new BrokerException("cannot prepare the broker's data directory " + logs + ": " + e.getMessage(), e);
+        }
+        Properties config = config(logs, clientPort, controllerPort);
+        format(logs);
         KafkaRaftServer server = new KafkaRaftServer(KafkaConfig.fromProps(config, false), Time.SYSTEM);
         try {
             server.startup();
