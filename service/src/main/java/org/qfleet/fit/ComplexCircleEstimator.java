@@ -72,9 +72,9 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         double[] start = coarse(new CircleProblem(xs, rs, is, false, false), new double[] {a[2], a[3], x0, g, t}, stride);
         LevenbergMarquardt.Solution s5 = LevenbergMarquardt.solve(plain, start);
         double[] p5 = s5.p();
-        CircleProblem withBackground = new CircleProblem(x, re, im, true, false);
-        double[] p7 = {0, 0, p5[0], p5[1], p5[2], p5[3], p5[4]};
         if (backgroundScore(plain, p5) > BACKGROUND_SIGNIFICANCE * s5.cost() / Math.max(1, 2 * n - 7)) {
+            CircleProblem withBackground = new CircleProblem(x, re, im, true, false);
+            double[] p7 = {0, 0, p5[0], p5[1], p5[2], p5[3], p5[4]};
             LevenbergMarquardt.Solution s7 = LevenbergMarquardt.solve(withBackground, p7);
             double sigma2 = s7.cost() / Math.max(1, 2 * n - 7);
             if (s5.cost() - s7.cost() > BACKGROUND_SIGNIFICANCE * sigma2) {
