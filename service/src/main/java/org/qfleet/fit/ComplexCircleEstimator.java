@@ -19,7 +19,7 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
     /** Points kept for the coarse solution of a long sweep. */
     private static final int COARSE_POINTS = 100;
     /** Coarse points per half width the resonance must keep. */
-    private static final double COARSE_POINTS_PER_HALF_WIDTH = 6;
+    private static final double COARSE_POINTS_PER_HALF_WIDTH = 4;
 
     @Override
     public Method method() {

@@ -102,15 +102,17 @@ final class StartingPoint {
 
     private static double[] smooth(double[] v, int halfWindow) {
         int n = v.length;
+        double[] prefix = new double[n + 1];
+        double running = 0;
+        for (int i = 0; i < n; i++) {
+            running += v[i];
+            prefix[i + 1] = running;
+        }
         double[] s = new double[n];
         for (int i = 0; i < n; i++) {
             int lo = Math.max(0, i - halfWindow);
             int hi = Math.min(n - 1, i + halfWindow);
-            double sum = 0;
-            for (int j = lo; j <= hi; j++) {
-                sum += v[j];
-            }
-            s[i] = sum / (hi - lo + 1);
+            s[i] = (prefix[hi + 1] - prefix[lo]) / (hi - lo + 1);
         }
         return s;
     }
