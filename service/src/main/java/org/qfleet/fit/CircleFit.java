@@ -11,11 +11,12 @@ package org.qfleet.fit;
  * @param background   whether B was fitted (else B = 0)
  * @param tilt         whether a magnitude slope was fitted (the last parameter)
  * @param sigma        residual standard deviation per real component
+ * @param noiseSigma   noise per real component estimated from the data alone
  * @param points       number of complex points fitted
  * @param residualPower |data - model|^2 at each point
  */
 record CircleFit(double[] parameters, double[][] covariance, double referenceHz, double scaleHz,
-                 boolean background, boolean tilt, double sigma, int points, double[] residualPower) {
+                 boolean background, boolean tilt, double sigma, double noiseSigma, int points, double[] residualPower) {
 
     CircleModel model() {
         return model(parameters);

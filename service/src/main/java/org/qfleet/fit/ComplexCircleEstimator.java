@@ -33,7 +33,7 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         }
         CircleFit fit = fitCircle(frequencyHz, trace.re(), trace.im(), topology);
         return new TraceFit(fit.parameters(), fit.covariance(), p -> ResonanceShape.of(fit.model(p)), fit.model(),
-                Method.COMPLEX_CIRCLE, fit.sigma(), NoiseEstimate.complexSigma(trace.re(), trace.im()), fit.residualPower());
+                Method.COMPLEX_CIRCLE, fit.sigma(), fit.noiseSigma(), fit.residualPower());
     }
 
     /**
@@ -50,7 +50,9 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         // Behind a large background (notch, reflection) a long delay spins the whole trace faster than
         // the resonance moves along it: take the delay out first, from the background's phase slope.
         double spin = topology == Topology.TRANSMISSION ? 0 : StartingPoint.backgroundDelay(x, re, im);
-        double[] peak = spin == 0 ? StartingPoint.speedPeak(x, re, im) : StartingPoint.speedPeak(x, StartingPoint.rotated(x, re, im, spin));
+        double noise = NoiseEstimate.complexSigma(re, im);
+        double[] peak = spin == 0 ? StartingPoint.speedPeak(x, re, im, noise)
+                : StartingPoint.speedPeak(x, StartingPoint.rotated(x, re, im, spin), noise);
         double x0 = peak[0];
         double g = peak[1];
         double t = StartingPoint.delay(x, re, im, x0, g);
@@ -66,7 +68,7 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         if (!transmission) {
             double[] start = {a[0], a[1], a[2], a[3], x0, g, t, 0};
             return solve(new CircleProblem(x, re, im, true, true), coarse(new CircleProblem(xs, rs, is, true, true), start, stride),
-                    n, referenceHz, scaleHz);
+                    n, referenceHz, scaleHz, noise);
         }
         CircleProblem plain = new CircleProblem(x, re, im, false, false);
         double[] start = coarse(new CircleProblem(xs, rs, is, false, false), new double[] {a[2], a[3], x0, g, t}, stride);
@@ -78,10 +80,10 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
             LevenbergMarquardt.Solution s7 = LevenbergMarquardt.solve(withBackground, p7);
             double sigma2 = s7.cost() / Math.max(1, 2 * n - 7);
             if (s5.cost() - s7.cost() > BACKGROUND_SIGNIFICANCE * sigma2) {
-                return toFit(s7, withBackground, n, referenceHz, scaleHz);
+                return toFit(s7, withBackground, n, referenceHz, scaleHz, noise);
             }
         }
-        return toFit(s5, plain, n, referenceHz, scaleHz);
+        return toFit(s5, plain, n, referenceHz, scaleHz, noise);
     }
 
     /** Every k-th sample, so the coarse solution sees about {@link #COARSE_POINTS} points across the line. */
@@ -106,9 +108,9 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         return stride == 1 ? start : LevenbergMarquardt.solve(problem, start).p();
     }
 
-    private static CircleFit solve(CircleProblem problem, double[] start, int n, double referenceHz, double scaleHz)
-            throws FitException {
-        return toFit(LevenbergMarquardt.solve(problem, start), problem, n, referenceHz, scaleHz);
+    private static CircleFit solve(CircleProblem problem, double[] start, int n, double referenceHz, double scaleHz,
+                                   double noise) throws FitException {
+        return toFit(LevenbergMarquardt.solve(problem, start), problem, n, referenceHz, scaleHz, noise);
     }
 
     /**
@@ -136,7 +138,7 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
     }
 
     private static CircleFit toFit(LevenbergMarquardt.Solution s, CircleProblem problem, int n,
-                                   double referenceHz, double scaleHz) throws FitException {
+                                   double referenceHz, double scaleHz, double noise) throws FitException {
         int k = problem.parameterCount();
         double sigma2 = s.cost() / Math.max(1, 2 * n - k);
         double[][] inverse = Covariance.of(s.jtj(), sigma2);
@@ -149,6 +151,6 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
             throw new FitException("no resonance found: the fitted width is zero or not finite");
         }
         return new CircleFit(p, inverse, referenceHz, scaleHz, problem.background(), problem.tilt(),
-                Math.sqrt(sigma2), n, problem.residualPower(p));
+                Math.sqrt(sigma2), noise, n, problem.residualPower(p));
     }
 }

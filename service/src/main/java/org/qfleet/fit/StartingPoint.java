@@ -14,11 +14,11 @@ final class StartingPoint {
      * A / (1 + j (x - x0) / g) the speed is |A| g / (g^2 + (x - x0)^2), a Lorentzian in x whose full
      * width at half height is 2 g, whatever the background.
      *
+     * @param noise standard deviation of the noise per component (the same for a rotated trace)
      * @return {x0, g}
      */
-    static double[] speedPeak(double[] x, double[] re, double[] im) {
+    static double[] speedPeak(double[] x, double[] re, double[] im, double noise) {
         int n = x.length;
-        double noise = NoiseEstimate.complexSigma(re, im);
         // Difference over a baseline of 2m points, m doubled until the largest step stands well out of
         // the noise (|dz| of pure noise averages 1.8 sigma): long baselines see through noise, short ones resolve narrow lines.
         int m = 1;
@@ -151,8 +151,8 @@ final class StartingPoint {
         return out;
     }
 
-    static double[] speedPeak(double[] x, double[][] reIm) {
-        return speedPeak(x, reIm[0], reIm[1]);
+    static double[] speedPeak(double[] x, double[][] reIm, double noise) {
+        return speedPeak(x, reIm[0], reIm[1], noise);
     }
 
     /**
