@@ -48,7 +48,7 @@ final class FitCommand implements Callable<Integer> {
             description = "Also write one SVG plot per sweep into DIR (created if needed).")
     Path plotDirectory;
 
-    @Option(names = "--max-points", paramLabel = "N", defaultValue = "100001",
+    @Option(names = "--max-points", paramLabel = "N", defaultValue = "" + SweepLimits.DEFAULT_MAX_POINTS,
             description = "Reject sweeps with more than N points (default: ${DEFAULT-VALUE}).")
     int maxPoints;
 

@@ -3,6 +3,7 @@ package org.qfleet.app;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.qfleet.sweep.SweepLimits;
 import org.qfleet.verdict.CatalogueFile;
 import org.qfleet.verdict.InvalidCatalogueException;
 import org.qfleet.verdict.ProductCatalogue;
@@ -55,7 +56,7 @@ final class ServiceOptions {
             description = "Replication factor of created topics (default: 1 embedded, else the broker's default).")
     Integer replicationFactor;
 
-    @Option(names = "--max-points", paramLabel = "N", description = "Reject sweeps with more than N points (default: 100001).")
+    @Option(names = "--max-points", paramLabel = "N", description = "Reject sweeps with more than N points (default: " + SweepLimits.DEFAULT_MAX_POINTS + ").")
     Integer maxPoints;
 
     @Option(names = "--products", paramLabel = "FILE",

@@ -15,7 +15,7 @@ import org.qfleet.sweep.Trace;
 final class ComplexCircleEstimator implements ResonanceEstimator {
 
     /** chi-square(2) at 0.999: a background is kept only when it lowers the cost by more than this many sigma^2. */
-    private static final double BACKGROUND_SIGNIFICANCE = 13.8;
+    static final double BACKGROUND_SIGNIFICANCE = 13.8;
     /** Points kept for the coarse solution of a long sweep. */
     private static final int COARSE_POINTS = 100;
     /** Coarse points per half width the resonance must keep. */

@@ -11,7 +11,8 @@ import org.qfleet.sweep.Trace;
  */
 final class LorentzianEstimator implements ResonanceEstimator {
 
-    private static final double BACKGROUND_SIGNIFICANCE = 13.8;
+    /** The same test as the circle fit: chi-square(2) at 0.999, in units of sigma^2. */
+    private static final double BACKGROUND_SIGNIFICANCE = ComplexCircleEstimator.BACKGROUND_SIGNIFICANCE;
 
     @Override
     public Method method() {

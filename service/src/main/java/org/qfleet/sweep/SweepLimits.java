@@ -9,7 +9,10 @@ package org.qfleet.sweep;
 public record SweepLimits(int minPoints, int maxPoints) {
 
     /** Seven points is the least that can constrain a circle with delay; 100 001 is far above any analyzer's sweep. */
-    public static final SweepLimits DEFAULT = new SweepLimits(7, 100_001);
+    /** Default bound on points per sweep, as a constant so that command-line defaults can name it. */
+    public static final int DEFAULT_MAX_POINTS = 100_001;
+
+    public static final SweepLimits DEFAULT = new SweepLimits(7, DEFAULT_MAX_POINTS);
 
     public SweepLimits {
         if (minPoints < 1 || maxPoints < minPoints) {
