@@ -46,7 +46,7 @@ final class DriftTopology {
         return drift.withLotLimits(limits);
     }
 
-    static void add(StreamsBuilder builder, Topics topics, DriftSettings drift) {
+    static void add(StreamsBuilder builder, Topics topics, DriftSettings drift, ServiceObserver observer) {
         LotMonitor lotMonitor = new LotMonitor(drift);
         StationMonitor stationMonitor = new StationMonitor(drift);
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(PRODUCTS_STORE), Serdes.String(), Serdes.ByteArray()));
@@ -58,12 +58,12 @@ final class DriftTopology {
                     return m.map(x -> List.of(KeyValue.pair(x.product(), DriftJson.write(x)))).orElse(List.of());
                 })
                 .repartition(Repartitioned.with(Serdes.String(), Serdes.ByteArray()).withName("drift-by-product"))
-                .process(() -> new LotStageProcessor(lotMonitor), PRODUCTS_STORE, LOTS_STORE);
+                .process(() -> new LotStageProcessor(lotMonitor, observer), PRODUCTS_STORE, LOTS_STORE);
         lotOut.filter((k, v) -> DriftRecords.isAlert(v)).mapValues(DriftRecords::untagged)
                 .to(topics.alerts(), Produced.with(Serdes.String(), Serdes.ByteArray()));
         lotOut.filter((k, v) -> DriftRecords.isStationInput(v)).mapValues(DriftRecords::untagged)
                 .repartition(Repartitioned.with(Serdes.String(), Serdes.ByteArray()).withName("drift-by-station"))
-                .process(() -> new StationStageProcessor(stationMonitor), STATIONS_STORE)
+                .process(() -> new StationStageProcessor(stationMonitor, observer), STATIONS_STORE)
                 .to(topics.alerts(), Produced.with(Serdes.String(), Serdes.ByteArray()));
     }
 }

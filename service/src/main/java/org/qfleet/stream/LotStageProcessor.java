@@ -1,5 +1,7 @@
 package org.qfleet.stream;
 
+import java.util.ArrayList;
+import java.util.List;
 import org.apache.kafka.streams.processor.api.ContextualProcessor;
 import org.apache.kafka.streams.processor.api.ProcessorContext;
 import org.apache.kafka.streams.processor.api.Record;
@@ -22,8 +24,11 @@ final class LotStageProcessor extends ContextualProcessor<String, byte[], String
     private KeyValueStore<String, byte[]> products;
     private KeyValueStore<String, byte[]> lots;
 
-    LotStageProcessor(LotMonitor monitor) {
+    private final ServiceObserver observer;
+
+    LotStageProcessor(LotMonitor monitor, ServiceObserver observer) {
         this.monitor = monitor;
+        this.observer = observer;
     }
 
     @Override
@@ -37,6 +42,8 @@ final class LotStageProcessor extends ContextualProcessor<String, byte[], String
     public void process(Record<String, byte[]> record) {
         Measurement m = DriftJson.read(record.value(), Measurement.class);
         ProductState before = DriftJson.read(products.get(m.product()), ProductState.class);
+        List<LotState> updated = new ArrayList<>();
+        List<String> closed = new ArrayList<>();
         LotMonitor.Outcome outcome = monitor.accept(before, m, new LotMonitor.LotStore() {
             @Override
             public LotState get(String product, String lot) {
@@ -46,17 +53,22 @@ final class LotStageProcessor extends ContextualProcessor<String, byte[], String
             @Override
             public void put(LotState state) {
                 lots.put(state.product() + "/" + state.lot(), DriftJson.write(state));
+                updated.add(state);
             }
 
             @Override
             public void delete(String product, String lot) {
                 lots.delete(product + "/" + lot);
+                closed.add(lot);
             }
         });
         products.put(m.product(), DriftJson.write(outcome.product()));
         for (Alert a : outcome.alerts()) {
             context().forward(record.withKey(a.key()).withValue(DriftRecords.alert(alertJson.write(a))));
+            observer.alertPublished(a);
         }
+        updated.forEach(lot -> observer.lotUpdated(lot, outcome.product().baseline()));
+        closed.forEach(lot -> observer.lotClosed(m.product(), lot));
         String stationKey = m.product() + "/" + m.station();
         context().forward(record.withKey(stationKey).withValue(DriftRecords.stationInput(DriftJson.write(outcome.forward()))));
     }

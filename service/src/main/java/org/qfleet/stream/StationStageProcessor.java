@@ -15,8 +15,11 @@ final class StationStageProcessor extends ContextualProcessor<String, byte[], St
     private final AlertJson alertJson = new AlertJson();
     private KeyValueStore<String, byte[]> stations;
 
-    StationStageProcessor(StationMonitor monitor) {
+    private final ServiceObserver observer;
+
+    StationStageProcessor(StationMonitor monitor, ServiceObserver observer) {
         this.monitor = monitor;
+        this.observer = observer;
     }
 
     @Override
@@ -30,6 +33,10 @@ final class StationStageProcessor extends ContextualProcessor<String, byte[], St
         StationInput in = DriftJson.read(record.value(), StationInput.class);
         StationMonitor.Step step = monitor.accept(DriftJson.read(stations.get(record.key()), StationState.class), in);
         stations.put(record.key(), DriftJson.write(step.state()));
-        step.message().ifPresent(a -> context().forward(record.withKey(a.key()).withValue(alertJson.write(a))));
+        observer.stationUpdated(step.state());
+        step.message().ifPresent(a -> {
+            context().forward(record.withKey(a.key()).withValue(alertJson.write(a)));
+            observer.alertPublished(a);
+        });
     }
 }

@@ -34,7 +34,14 @@ public final class StreamService implements AutoCloseable {
 
     /** Builds the topology with the given drift settings and starts processing. */
     public static StreamService start(StreamSettings settings, ProductCatalogue catalogue, DriftSettings drift) {
-        KafkaStreams streams = new KafkaStreams(SweepTopology.build(settings, catalogue, drift), settings.streamsProperties());
+        return start(settings, catalogue, drift, ServiceObserver.NONE);
+    }
+
+    /** Builds the topology, reporting what it does to {@code observer}, and starts processing. */
+    public static StreamService start(StreamSettings settings, ProductCatalogue catalogue, DriftSettings drift,
+            ServiceObserver observer) {
+        KafkaStreams streams = new KafkaStreams(SweepTopology.build(settings, catalogue, drift, observer),
+                settings.streamsProperties());
         StreamService service = new StreamService(streams);
         streams.setStateListener((now, before) -> {
             if (now == KafkaStreams.State.RUNNING) {

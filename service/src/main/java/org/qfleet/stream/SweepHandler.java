@@ -28,8 +28,14 @@ public final class SweepHandler {
     private final ProductCatalogue catalogue;
     private final ResonanceAnalyzer analyzer = new ResonanceAnalyzer();
     private final ResultMessageJson json = new ResultMessageJson();
+    private final ServiceObserver observer;
 
     public SweepHandler(StreamSettings settings, ProductCatalogue catalogue) {
+        this(settings, catalogue, ServiceObserver.NONE);
+    }
+
+    public SweepHandler(StreamSettings settings, ProductCatalogue catalogue, ServiceObserver observer) {
+        this.observer = observer;
         this.reader = new SweepJsonReader(settings.limits());
         this.maxSweepBytes = settings.maxSweepBytes();
         this.catalogue = catalogue;
@@ -58,8 +64,11 @@ public final class SweepHandler {
         }
         String sweepId = sweep.info().sweepId();
         try {
+            long start = System.nanoTime();
             ResonanceResult result = analyzer.analyze(sweep);
+            long fitNanos = System.nanoTime() - start;
             Verdict verdict = catalogue.judge(sweep.info().product(), sweep.topology(), result);
+            observer.sweepFitted(sweep, result, verdict, fitNanos);
             return new SweepOutcome.Fitted(sweepId, json.write(sweep, result, verdict));
         } catch (FitException e) {
             return new SweepOutcome.Failed(RejectCodes.FIT_FAILED, e.getMessage(), sweepId);

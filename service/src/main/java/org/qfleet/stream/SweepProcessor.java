@@ -13,10 +13,12 @@ final class SweepProcessor extends ContextualProcessor<byte[], byte[], byte[], b
 
     private final SweepHandler handler;
     private final RejectJson rejects;
+    private final ServiceObserver observer;
 
-    SweepProcessor(SweepHandler handler, RejectJson rejects) {
+    SweepProcessor(SweepHandler handler, RejectJson rejects, ServiceObserver observer) {
         this.handler = handler;
         this.rejects = rejects;
+        this.observer = observer;
     }
 
     @Override
@@ -32,6 +34,7 @@ final class SweepProcessor extends ContextualProcessor<byte[], byte[], byte[], b
             Reject reject = new Reject(failed.code(), failed.message(), failed.sweepId(), topic, partition, offset,
                     record.key(), record.value());
             context().forward(record.withValue(rejects.write(reject)), SweepTopology.REJECTS_SINK);
+            observer.sweepRejected(failed.code());
         }
     }
 }

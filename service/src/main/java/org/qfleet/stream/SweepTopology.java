@@ -30,13 +30,19 @@ public final class SweepTopology {
 
     /** The whole topology: fitting (stateless) and drift monitoring ({@link DriftTopology}). */
     public static Topology build(StreamSettings settings, ProductCatalogue catalogue, DriftSettings drift) {
-        SweepHandler handler = new SweepHandler(settings, catalogue);
+        return build(settings, catalogue, drift, ServiceObserver.NONE);
+    }
+
+    /** The whole topology, reporting what it does to {@code observer}. */
+    public static Topology build(StreamSettings settings, ProductCatalogue catalogue, DriftSettings drift,
+            ServiceObserver observer) {
+        SweepHandler handler = new SweepHandler(settings, catalogue, observer);
         RejectJson rejects = new RejectJson(settings.maxRejectPayloadBytes());
         StreamsBuilder builder = new StreamsBuilder(new TopologyConfig(new StreamsConfig(settings.streamsProperties())));
-        DriftTopology.add(builder, settings.topics(), DriftTopology.withCatalogue(drift, catalogue));
+        DriftTopology.add(builder, settings.topics(), DriftTopology.withCatalogue(drift, catalogue), observer);
         Topology topology = builder.build();
         topology.addSource(SOURCE, new ByteArrayDeserializer(), new ByteArrayDeserializer(), settings.topics().sweeps());
-        topology.addProcessor(PROCESSOR, () -> new SweepProcessor(handler, rejects), SOURCE);
+        topology.addProcessor(PROCESSOR, () -> new SweepProcessor(handler, rejects, observer), SOURCE);
         topology.addSink(RESULTS_SINK, settings.topics().results(), new ByteArraySerializer(), new ByteArraySerializer(), PROCESSOR);
         topology.addSink(REJECTS_SINK, settings.topics().rejects(), new ByteArraySerializer(), new ByteArraySerializer(), PROCESSOR);
         return topology;
