@@ -51,8 +51,27 @@ public record Baseline(
         return new Baseline(product, quMean, quSigma, f0MeanHz, f0SigmaHz, levelMeanDb, levelSigmaDb, limit, origin, units);
     }
 
-    /** The X-bar lower limit of a lot of {@code n} units: mu0 - 3 sigma0 / sqrt(n) (Shewhart; Montgomery). */
+    /**
+     * Width of the lot-mean limit in standard errors. The textbook X-bar limit is 3 (Shewhart;
+     * Montgomery) for one look at a subgroup; a lot's growing mean is looked at after every unit,
+     * and with 3 about one in-control lot in sixty crossed it somewhere in 150 units in our
+     * simulations (repeated looks at a random walk), with 3.5 none in 320. A lot 2 sigma0 low
+     * still crosses it from its fourth unit on, before the minimum lot count.
+     */
+    public static final double XBAR_WIDTH = 3.5;
+
+    /**
+     * The X-bar lower limit of a lot of {@code n} units: mu0 - 3.5 sigma0 / sqrt(n), widened for a learned baseline by the uncertainty of its own mean, whose
+     * variance is sigma0^2 / units: without it a mean learned 0.1 sigma0 too high would put every
+     * large lot near its limit.
+     */
     public double xbarLowerLimit(long n) {
-        return quMean - 3 * quSigma / Math.sqrt(n);
+        return lowerLimit(n, XBAR_WIDTH);
+    }
+
+    /** mu0 - width sigma0 sqrt(1/n + the baseline's own relative variance), see {@link #xbarLowerLimit}. */
+    double lowerLimit(long n, double width) {
+        double own = units > 0 ? 1.0 / units : 0;
+        return quMean - width * quSigma * Math.sqrt(1.0 / n + own);
     }
 }

@@ -30,4 +30,9 @@ public record Cusum(double k, double h, double upper, double lower, long samples
     public boolean beyondLimit() {
         return upper > h || lower > h;
     }
+
+    /** The chart started afresh (after a signal that waits for confirmation). */
+    public Cusum restarted() {
+        return start(k, h);
+    }
 }

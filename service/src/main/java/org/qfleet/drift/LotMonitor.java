@@ -5,6 +5,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import java.util.function.Function;
 
 /**
  * The lot side of drift monitoring, for all lots of one product: learns or applies the product's
@@ -86,7 +87,9 @@ public final class LotMonitor {
     private ProductState closeQuietLots(ProductState p, String current, LotStore lots, List<Alert> alerts) {
         long quiet = settings.quietPeriod().toMillis();
         for (Map.Entry<String, Long> open : new TreeMap<>(p.openLots()).entrySet()) {
-            if (open.getKey().equals(current) || p.latestEventTime() - open.getValue() <= quiet) {
+            boolean quietInTime = p.latestEventTime() - open.getValue() > quiet;
+            boolean quietInUnits = settings.closeAfterUnits() > 0 && p.unitsSince(open.getKey()) >= settings.closeAfterUnits();
+            if (open.getKey().equals(current) || !(quietInTime || quietInUnits)) {
                 continue;
             }
             LotState lot = lots.get(p.product(), open.getKey());
@@ -100,9 +103,24 @@ public final class LotMonitor {
         return p;
     }
 
+    /**
+     * Whether more than half of the lot's units (at least twice the minimum lot count seen) were
+     * excluded for their flags; an open alert holds until the share is under a quarter (thresholds
+     * as in {@link ExcludedShare}).
+     */
+    private boolean excludedShareTooHigh(LotState lot, boolean held) {
+        long total = lot.excluded() + lot.stats().count();
+        double share = total == 0 ? 0 : (double) lot.excluded() / total;
+        return total >= 2L * settings.minLotCount() && share > (held ? ExcludedShare.CLEAR_BELOW : ExcludedShare.RAISE_ABOVE);
+    }
+
     private Evidence evidence(LotState lot, Baseline b, long eventTime) {
         LotStatistics s = lot.stats();
-        List<Rule> firing = rule.firing(s, b, lot.alerts().open() == null ? List.of() : lot.alerts().open().rules());
+        List<Rule> held = lot.alerts().open() == null ? List.of() : lot.alerts().open().rules();
+        List<Rule> firing = new ArrayList<>(rule.firing(s, b, held.stream().filter(r -> r != Rule.LOT_EXCLUDED_SHARE).toList()));
+        if (excludedShareTooHigh(lot, held.contains(Rule.LOT_EXCLUDED_SHARE))) {
+            firing.add(Rule.LOT_EXCLUDED_SHARE);
+        }
         Severity severity = firing.contains(Rule.LOT_MEAN_BELOW_LOT_LIMIT) ? Severity.CRITICAL : Severity.WARNING;
         Map<String, Double> figures = new HashMap<>();
         figures.put("n", (double) s.count());
@@ -118,49 +136,56 @@ public final class LotMonitor {
     }
 
     /**
-     * The unit's standardized deviations. Qu is measured against the same lot's units on the other
-     * stations once they hold at least {@code minReferenceUnits} (so a lot that is low everywhere
-     * does not move a station's chart), and not charted before (the first units of a lot, and lots
-     * measured on one station only, which the lot-mean rule covers): the median of the other stations' means when there are
-     * three or more (so one faulty station does not drag the others' reference), else the mean of
-     * their means; the scale sigma0 sqrt(1 + var(reference)/sigma0^2) allows for the reference's own
-     * noise (the variance of a median of k means of n units taken as pi/2 sigma0^2/n, its
-     * large-sample value; common practice). f0 and the coupling level are fixture properties: they
-     * are measured against the product baseline, which a faulty station cannot move.
+     * The unit's standardized deviations from the same lot's units on the other stations, once
+     * they hold at least {@code minReferenceUnits} units (so a lot that is low everywhere, in Qu and
+     * in the coupling level that follows Qu, does not move a station's charts): the median of the
+     * other stations' means when there are three or more (so one faulty station does not drag the
+     * others' reference), else the mean of their means; the scale sigma0 sqrt(1 + var(reference) /
+     * sigma0^2) allows for the reference's own noise (the variance of a median of k means of n units
+     * taken as pi/2 sigma0^2/n, its large-sample value; common practice). Before the lot has such a
+     * reference, Qu and the coupling level are not charted (the lot-mean rule covers the first
+     * units of a lot, and lots measured on one station only), while f0, which a lot's quality does
+     * not move, is measured against the product baseline.
      */
     private StationInput stationInput(Measurement m, Baseline b, LotStatistics stats) {
         if (b == null || !m.trusted()) {
             return new StationInput(m.product(), m.station(), m.lot(), m.unit(), m.measuredAt(), m.trusted(),
                     Double.NaN, Double.NaN, Double.NaN, b);
         }
-        double qu = quDeviation(m, b, stats);
-        double f0 = standardized(m.f0Hz(), b.f0MeanHz(), b.f0SigmaHz());
-        double level = standardized(m.levelDb(), b.levelMeanDb(), b.levelSigmaDb());
+        List<StationShare> others = new ArrayList<>();
+        new TreeMap<>(stats.byStation()).forEach((station, share) -> {
+            if (!station.equals(m.station())) {
+                others.add(share);
+            }
+        });
+        double qu = deviation(m.qUnloaded(), others, StationShare::qu, b.quSigma());
+        double f0 = deviation(m.f0Hz(), others, StationShare::f0, b.f0SigmaHz());
+        if (Double.isNaN(f0)) {
+            f0 = standardized(m.f0Hz(), b.f0MeanHz(), b.f0SigmaHz());
+        }
+        double level = deviation(m.levelDb(), others, StationShare::level, b.levelSigmaDb());
         return new StationInput(m.product(), m.station(), m.lot(), m.unit(), m.measuredAt(), true, qu, f0, level, b);
     }
 
-    private double quDeviation(Measurement m, Baseline b, LotStatistics stats) {
-        List<Welford> others = new ArrayList<>();
-        long units = 0;
-        for (Map.Entry<String, StationShare> e : new TreeMap<>(stats.byStation()).entrySet()) {
-            if (!e.getKey().equals(m.station())) {
-                others.add(e.getValue().qu());
-                units += e.getValue().qu().n();
-            }
+    private double deviation(double x, List<StationShare> others, Function<StationShare, Welford> quantity, double sigma) {
+        if (!Double.isFinite(x) || !(sigma > 0)) {
+            return Double.NaN;
         }
+        List<Welford> parts = others.stream().map(quantity).filter(w -> w.n() > 0).toList();
+        long units = parts.stream().mapToLong(Welford::n).sum();
         if (units < settings.minReferenceUnits()) {
             return Double.NaN;
         }
         double reference;
         double relativeVariance;
-        if (others.size() >= 3) {
-            reference = RobustStats.median(others.stream().mapToDouble(Welford::mean).toArray());
-            relativeVariance = Math.PI / 2 * others.size() / units;
+        if (parts.size() >= 3) {
+            reference = RobustStats.median(parts.stream().mapToDouble(Welford::mean).toArray());
+            relativeVariance = Math.PI / 2 * parts.size() / units;
         } else {
-            reference = others.stream().mapToDouble(Welford::mean).average().orElseThrow();
-            relativeVariance = others.stream().mapToDouble(w -> 1.0 / w.n()).sum() / (others.size() * others.size());
+            reference = parts.stream().mapToDouble(Welford::mean).average().orElseThrow();
+            relativeVariance = parts.stream().mapToDouble(w -> 1.0 / w.n()).sum() / (parts.size() * parts.size());
         }
-        return (m.qUnloaded() - reference) / (b.quSigma() * Math.sqrt(1 + relativeVariance));
+        return (x - reference) / (sigma * Math.sqrt(1 + relativeVariance));
     }
 
     private static double standardized(double x, double mean, double sigma) {

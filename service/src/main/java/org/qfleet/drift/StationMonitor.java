@@ -10,13 +10,26 @@ import java.util.Optional;
  * The station side of drift monitoring: an EWMA chart of the standardized Qu deviation
  * (lambda 0.2, L 2.962; Lucas & Saccucci 1990) and two-sided tabular CUSUMs (k = 0.5, h = 5;
  * Montgomery) of the standardized f0 and coupling-level deviations, which catch a fixture fault
- * before Qu moves. Qu deviations are taken from the same lot's units on the other stations, f0 and
- * coupling deviations from the product baseline ({@link LotMonitor}), so a lot that is low on every
- * station does not move any station's charts, and a station that keeps deviating lot after lot is
- * what the charts see: the alert carries its Qu deviation per recent lot as evidence. Charts take units in arrival order; a retest is one more
- * measurement for the station. Stateless itself.
+ * before Qu moves. All three deviations are taken from the same lot's units on the other stations
+ * ({@link LotMonitor}), so a lot that is low on every station does not move any station's charts,
+ * and a station that keeps deviating lot after lot is what the charts see: the alert carries its
+ * Qu deviation per recent lot as evidence.
+ *
+ * <p>Three charts per station, each with an in-control run length near 500, would alert a healthy
+ * station about once per 160 units. A station is therefore alerted only on a confirmed signal:
+ * the chart that signals is restarted, and must signal again within
+ * {@link DriftSettings#confirmWithin()} charted units (default 30). In control a restarted chart
+ * rarely signals that soon, while a real shift gives the second signal after about the chart's
+ * own run length again: the station is reported after roughly twice the published delay
+ * (common practice: act on a repeated signal, as with two-of-three run rules). An open alert
+ * holds while any chart is still signalled and clears when all are back. The share of excluded
+ * units is watched too. Charts take units in arrival order; a retest is one more measurement for
+ * the station. Stateless itself.
  */
 public final class StationMonitor {
+
+    /** {@link StationState#beyondRun()} when a signal is confirmed. */
+    static final int CONFIRMED = -1;
 
     private final DriftSettings settings;
 
@@ -31,21 +44,43 @@ public final class StationMonitor {
     /** @param state the station's state, null for a station not seen before */
     public Step accept(StationState state, StationInput in) {
         StationState s = state == null ? StationState.start(in.product(), in.station(), settings) : state;
-        if (!in.trusted()) {
-            return new Step(new StationState(s.product(), s.station(), s.qu(), s.f0(), s.level(), s.excluded() + 1,
-                    s.recentLots(), s.alerts()), Optional.empty());
+        ExcludedShare exclusions = s.exclusions().plus(!in.trusted());
+        long excluded = s.excluded() + (in.trusted() ? 0 : 1);
+        Ewma qu = s.qu();
+        Cusum f0 = s.f0();
+        Cusum level = s.level();
+        List<LotDeviation> lots = s.recentLots();
+        int run = s.beyondRun();
+        if (in.trusted() && in.baseline() != null) {
+            qu = Double.isFinite(in.quDev()) ? qu.plus(in.quDev()) : qu;
+            f0 = Double.isFinite(in.f0Dev()) ? f0.plus(in.f0Dev()) : f0;
+            level = Double.isFinite(in.levelDev()) ? level.plus(in.levelDev()) : level;
+            lots = Double.isFinite(in.quDev()) ? recentLots(lots, in.lot(), in.quDev()) : lots;
+            boolean charted = Double.isFinite(in.quDev()) || Double.isFinite(in.f0Dev()) || Double.isFinite(in.levelDev());
+            boolean beyond = qu.beyondLimit() || f0.beyondLimit() || level.beyondLimit();
+            if (charted && s.alerts().open() == null && settings.confirmWithin() > 0) {
+                if (beyond && run == 0) {
+                    // a first signal: restart the charts that gave it and wait for a second one
+                    qu = qu.beyondLimit() ? qu.restarted() : qu;
+                    f0 = f0.beyondLimit() ? f0.restarted() : f0;
+                    level = level.beyondLimit() ? level.restarted() : level;
+                    run = settings.confirmWithin();
+                } else if (beyond) {
+                    run = CONFIRMED;
+                } else if (run > 0) {
+                    run--;
+                }
+            } else if (s.alerts().open() != null || settings.confirmWithin() == 0) {
+                run = beyond ? CONFIRMED : 0;
+            }
         }
+        StationState next = new StationState(s.product(), s.station(), qu, f0, level, excluded, exclusions, run, lots,
+                s.alerts());
         if (in.baseline() == null) {
-            return new Step(s, Optional.empty());
+            return new Step(next, Optional.empty());
         }
-        Ewma qu = Double.isFinite(in.quDev()) ? s.qu().plus(in.quDev()) : s.qu();
-        Cusum f0 = Double.isFinite(in.f0Dev()) ? s.f0().plus(in.f0Dev()) : s.f0();
-        Cusum level = Double.isFinite(in.levelDev()) ? s.level().plus(in.levelDev()) : s.level();
-        List<LotDeviation> lots = Double.isFinite(in.quDev()) ? recentLots(s.recentLots(), in.lot(), in.quDev()) : s.recentLots();
-        StationState charted = new StationState(s.product(), s.station(), qu, f0, level, s.excluded(), lots, s.alerts());
-        AlertTracker.Step step = s.alerts().observe(evidence(charted, in));
-        return new Step(new StationState(s.product(), s.station(), qu, f0, level, s.excluded(), lots, step.tracker()),
-                step.message());
+        AlertTracker.Step step = s.alerts().observe(evidence(next, in));
+        return new Step(next.withAlerts(step.tracker()), step.message());
     }
 
     private static List<LotDeviation> recentLots(List<LotDeviation> recent, String lot, double dev) {
@@ -64,21 +99,30 @@ public final class StationMonitor {
         return next;
     }
 
+    /**
+     * Rules firing: a chart opens an episode only once a signal is confirmed; once an episode is
+     * open, every chart still signalled keeps it (and adds its rule).
+     */
     private static Evidence evidence(StationState s, StationInput in) {
         List<Rule> firing = new ArrayList<>();
-        if (s.qu().signalled()) {
+        boolean charts = s.alerts().open() != null || s.beyondRun() == CONFIRMED;
+        if (charts && s.qu().signalled()) {
             firing.add(Rule.QU_EWMA);
         }
-        if (s.f0().signalled()) {
+        if (charts && s.f0().signalled()) {
             firing.add(Rule.F0_CUSUM);
         }
-        if (s.level().signalled()) {
+        if (charts && s.level().signalled()) {
             firing.add(Rule.COUPLING_CUSUM);
+        }
+        if (s.exclusions().signalled()) {
+            firing.add(Rule.STATION_EXCLUDED_SHARE);
         }
         Severity severity = firing.size() >= 2 ? Severity.CRITICAL : Severity.WARNING;
         Map<String, Double> figures = new HashMap<>();
         figures.put("n", (double) s.qu().samples());
         figures.put("excluded", (double) s.excluded());
+        figures.put("excludedShare", s.exclusions().share());
         figures.put("quEwma", s.qu().z());
         figures.put("quEwmaLimit", s.qu().limit());
         figures.put("f0CusumUpper", s.f0().upper());

@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 /** Plant scenarios through both monitors: attribution, one alert per cause, clearing, false alerts. */
 class DriftScenarioTest {
 
-    private final DriftEngine engine = new DriftEngine(PlantValues.settings());
+    private DriftEngine engine = new DriftEngine(PlantValues.settings());
     private final List<Alert> alerts = new ArrayList<>();
 
     @Test
@@ -113,11 +113,12 @@ class DriftScenarioTest {
     }
 
     /**
-     * 5,000 in-control units: each station's three charts signal falsely about once per
-     * 1 / (1/500 + 2/465) = 159 charted units by design (two-sided ARLs of the EWMA and of two
-     * CUSUMs, Lucas & Saccucci 1990 and Montgomery), so 5,000 units may give about 31 station
-     * episodes; the test allows that expectation plus three Poisson standard deviations. Lots
-     * apply a 3-sigma limit to a growing mean after every unit; at most one lot in ten may cross it.
+     * 5,000 in-control units: with the station defaults (EWMA L 3.3, CUSUM h 7, a signal confirmed
+     * within 30 units; {@link DriftSettings#DEFAULT}) a healthy station is alerted about once per
+     * 5,000 of its units in our simulations, against once per 160 for three charts at the
+     * single-chart designs (Lucas & Saccucci 1990, Montgomery); the test allows one expected
+     * episode plus three Poisson standard deviations. The lot limit at 3.5 standard errors is
+     * crossed by about none of 320 simulated in-control lots.
      */
     @Test
     void inControlUnitsRaiseNoMoreFalseAlertsThanTheDesignedRunLengthsAllow() {
@@ -125,13 +126,92 @@ class DriftScenarioTest {
         for (int lot = 1; lot <= 25; lot++) {
             feedAndCollect(plant.lot("L" + lot, 200, 1.0));
         }
-        double expectedStation = 5000 * (1 / 500.0 + 2 / 465.0);
         long station = raisedEpisodes().stream().filter(a -> a.kind() == AlertKind.STATION).count();
         long lot = raisedEpisodes().stream().filter(a -> a.kind() == AlertKind.LOT).count();
-        System.out.printf("5000 in-control units: %d station episodes (designed about %.1f), %d lot episodes in 25 lots%n",
-                station, expectedStation, lot);
-        assertThat(station).isLessThanOrEqualTo(Math.round(expectedStation + 3 * Math.sqrt(expectedStation)));
-        assertThat(lot).isLessThanOrEqualTo(2);
+        System.out.printf("5000 in-control units: %d station episodes (designed about 1), %d lot episodes in 25 lots%n",
+                station, lot);
+        assertThat(station).isLessThanOrEqualTo(4);
+        assertThat(lot).isLessThanOrEqualTo(1);
+    }
+
+    @Test
+    void theSingleChartDesignsAlertAHealthyStationOftenWhichIsWhyTheDefaultsAreWider() {
+        DriftEngine published = new DriftEngine(PlantValues.settings().withStationCharts(Ewma.DEFAULT_WIDTH, Cusum.DEFAULT_H, 0));
+        PlantValues plant = new PlantValues(17, 8);
+        long episodes = 0;
+        for (int lot = 1; lot <= 25; lot++) {
+            for (Measurement m : plant.lot("L" + lot, 200, 1.0)) {
+                episodes += published.accept(m).stream().filter(isRaised(AlertKind.STATION)).count();
+            }
+        }
+        // 1 / (1/500 + 2/465) = 159 units per false station alert by design: about 31 in 5,000
+        assertThat(episodes).isGreaterThan(15);
+    }
+
+    @Test
+    void aSingleSignalIsNotAnAlertUntilTheRestartedChartSignalsAgain() {
+        PlantValues plant = new PlantValues(18, 4);
+        feedAndCollect(plant.lot("L1", 200, 1.0));
+        // two units of st-01 read 6 sigma high in f0: the CUSUM signals once, is restarted, and stays quiet
+        List<Measurement> lot = new ArrayList<>(plant.lot("L2", 200, 1.0));
+        for (int i : new int[] {40, 44}) {
+            Measurement m = lot.get(i);
+            lot.set(i, new Measurement(m.product(), m.lot(), "st-01", m.unit(), m.measuredAt(), m.qUnloaded(),
+                    m.f0Hz() + 6 * PlantValues.F0_SIGMA, m.levelDb(), m.flags()));
+        }
+        feedAndCollect(lot);
+        assertThat(raisedEpisodes()).noneMatch(a -> a.kind() == AlertKind.STATION);
+        // a lasting shift of the same size is confirmed within a few of the station's units
+        List<Measurement> faulty = plant.lot("L3", 40, 1.0, "st-01", new PlantValues.Fault(0, 6 * PlantValues.F0_SIGMA, 0));
+        int stationUnits = 0;
+        for (Measurement m : faulty) {
+            stationUnits += m.station().equals("st-01") ? 1 : 0;
+            if (engine.accept(m).stream().anyMatch(isRaised(AlertKind.STATION))) {
+                break;
+            }
+        }
+        assertThat(stationUnits).isBetween(2, 6);
+    }
+
+    @Test
+    void aLotWhoseCouplingLevelFollowsItsLowQuIsNotBlamedOnAnyStation() {
+        PlantValues plant = new PlantValues(19, 4);
+        feedAndCollect(plant.lot("L1", 200, 1.0));
+        // weakly coupled transmission: insertion loss rises by 20 log10(Qu0/Qu) when Qu falls and Qe stays
+        feedAndCollect(plant.lot("L2", 150, 0.94).stream().map(m -> new Measurement(m.product(), m.lot(), m.station(), m.unit(),
+                m.measuredAt(), m.qUnloaded(), m.f0Hz(), m.levelDb() + 20 * Math.log10(1 / 0.94) * 4, m.flags())).toList());
+        assertThat(raisedEpisodes()).anyMatch(a -> a.kind() == AlertKind.LOT && a.subject().equals("L2"));
+        assertThat(raisedEpisodes()).noneMatch(a -> a.kind() == AlertKind.STATION);
+    }
+
+    @Test
+    void aLotClosesWhenEnoughUnitsOfOtherLotsFollowedIt() {
+        engine = new DriftEngine(PlantValues.settings().withQuietPeriod(Duration.ofDays(7)));
+        PlantValues plant = new PlantValues(20, 4);
+        feedAndCollect(plant.lot("L1", 200, 0.96));
+        assertThat(alerts).anyMatch(a -> a.subject().equals("L1") && a.status() == AlertStatus.RAISED);
+        feedAndCollect(plant.lot("L2", 99, 1.0));
+        assertThat(engine.get(PlantValues.PRODUCT, "L1")).isNotNull();
+        feedAndCollect(plant.lot("L3", 1, 1.0));
+        assertThat(engine.get(PlantValues.PRODUCT, "L1")).isNull();
+        Alert last = alerts.stream().filter(a -> a.subject().equals("L1")).reduce((a, b) -> b).orElseThrow();
+        assertThat(last.status()).isEqualTo(AlertStatus.CLEARED);
+        assertThat(last.clearedBy()).isEqualTo(Alert.LOT_CLOSED);
+    }
+
+    @Test
+    void aStationWhoseFitsAreMostlyFlaggedIsAlertedForItsExcludedShare() {
+        PlantValues plant = new PlantValues(21, 4);
+        feedAndCollect(plant.lot("L1", 200, 1.0));
+        feedAndCollect(plant.lot("L2", 200, 1.0).stream().map(m -> m.station().equals("st-04")
+                ? new Measurement(m.product(), m.lot(), m.station(), m.unit(), m.measuredAt(), m.qUnloaded(), m.f0Hz(),
+                        m.levelDb(), List.of("low-snr"))
+                : m).toList());
+        assertThat(raisedEpisodes()).anySatisfy(a -> {
+            assertThat(a.subject()).isEqualTo("st-04");
+            assertThat(a.rules()).containsExactly(Rule.STATION_EXCLUDED_SHARE);
+        });
+        assertThat(raisedEpisodes()).noneMatch(a -> a.kind() == AlertKind.LOT);
     }
 
     private static Predicate<Alert> isRaised(AlertKind kind) {

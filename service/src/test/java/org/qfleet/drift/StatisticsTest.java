@@ -55,19 +55,32 @@ class StatisticsTest {
     }
 
     @Test
-    void theLearnedBaselineIsMedianAndScaledMadAndIgnoresAnOutlier() {
+    void theLearnedBaselineIsTheMeanAndSdOfTheUnitsNearTheMedianAndIgnoresAnOutlier() {
         BaselineLearner learner = BaselineLearner.start("p", 5);
         double[] qu = {100, 102, 98, 101, 5};
         for (double q : qu) {
             learner = learner.plus(new Measurement("p", "L", "s", "u", 0, q, 1e9, 25, List.of()));
         }
         Baseline b = learner.baseline(90);
-        // median 100; absolute deviations 0, 2, 2, 1, 95 -> MAD 2; sigma = 1.4826 * 2
-        assertThat(b.quMean()).isEqualTo(100);
-        assertThat(b.quSigma()).isCloseTo(2.9652, offset(1e-9));
+        // median 100; absolute deviations 0, 2, 2, 1, 95 -> MAD 2, MAD-sigma 1.4826 * 2 = 2.97: the unit at 5 lies
+        // 32 MAD-sigmas out and is dropped; mean of 100, 102, 98, 101 = 100.25, sample SD 1.7078 / 0.9969
+        assertThat(b.quMean()).isCloseTo(100.25, offset(1e-9));
+        assertThat(b.quSigma()).isCloseTo(Math.sqrt((0.0625 + 3.0625 + 5.0625 + 0.5625) / 3) / 0.9969, offset(1e-9));
         assertThat(b.origin()).isEqualTo(Baseline.LEARNED);
         assertThat(b.units()).isEqualTo(5);
         assertThat(b.lotLimit()).isEqualTo(90);
+    }
+
+    @Test
+    void aLearnedSigmaIsNeverBelowItsFloor() {
+        BaselineLearner learner = BaselineLearner.start("p", 4);
+        for (int i = 0; i < 4; i++) {
+            learner = learner.plus(new Measurement("p", "L", "s", "u" + i, 0, 6000 + i * 0.01, 10e9, 25, List.of()));
+        }
+        Baseline b = learner.baseline(Double.NaN);
+        assertThat(b.quSigma()).isCloseTo(0.005 * b.quMean(), offset(1e-6));
+        assertThat(b.f0SigmaHz()).isCloseTo(2e-6 * 10e9, offset(1e-3));
+        assertThat(b.levelSigmaDb()).isEqualTo(0.05);
     }
 
     private static Measurement unit(String unit, String station, double qu) {
