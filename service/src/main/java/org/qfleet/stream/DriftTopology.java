@@ -11,6 +11,7 @@ import org.apache.kafka.streams.kstream.KStream;
 import org.apache.kafka.streams.kstream.Produced;
 import org.apache.kafka.streams.kstream.Repartitioned;
 import org.apache.kafka.streams.state.Stores;
+import org.qfleet.drift.Baseline;
 import org.qfleet.drift.DriftSettings;
 import org.qfleet.drift.LotMonitor;
 import org.qfleet.drift.Measurement;
@@ -35,7 +36,10 @@ final class DriftTopology {
     private DriftTopology() {
     }
 
-    /** The lot limit of each product is the catalogue's lower limit on Qu. */
+    /**
+     * The lot limit of each product is the catalogue's lower limit on Qu; baselines configured in
+     * the catalogue are used from the first unit (settings given in code take precedence).
+     */
     static DriftSettings withCatalogue(DriftSettings drift, ProductCatalogue catalogue) {
         Map<String, Double> limits = new java.util.HashMap<>(drift.lotLimits());
         for (ProductLimits l : catalogue.all()) {
@@ -43,7 +47,15 @@ final class DriftTopology {
                 limits.putIfAbsent(l.product(), l.qUnloadedMin());
             }
         }
-        return drift.withLotLimits(limits);
+        Map<String, Baseline> baselines = new java.util.HashMap<>(drift.baselines());
+        catalogue.baselines().forEach((product, b) -> baselines.putIfAbsent(product, new Baseline(product, b.quMean(), b.quSigma(),
+                orNaN(b.f0MeanHz()), orNaN(b.f0SigmaHz()), orNaN(b.insertionLossMeanDb()), orNaN(b.insertionLossSigmaDb()),
+                Double.NaN, Baseline.CONFIGURED, 0)));
+        return drift.withLotLimits(limits).withBaselines(baselines);
+    }
+
+    private static double orNaN(Double value) {
+        return value == null ? Double.NaN : value;
     }
 
     static void add(StreamsBuilder builder, Topics topics, DriftSettings drift, ServiceObserver observer) {

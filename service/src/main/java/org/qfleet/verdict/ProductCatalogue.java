@@ -16,8 +16,14 @@ import org.qfleet.sweep.Topology;
 public final class ProductCatalogue {
 
     private final Map<String, ProductLimits> products;
+    private final Map<String, ProductBaseline> baselines;
 
     public ProductCatalogue(Collection<ProductLimits> limits) {
+        this(limits, Map.of());
+    }
+
+    /** @param baselines configured in-control figures by product id, for the drift monitors */
+    public ProductCatalogue(Collection<ProductLimits> limits, Map<String, ProductBaseline> baselines) {
         Map<String, ProductLimits> byId = new LinkedHashMap<>();
         for (ProductLimits l : limits) {
             if (byId.putIfAbsent(l.product(), l) != null) {
@@ -25,6 +31,12 @@ public final class ProductCatalogue {
             }
         }
         this.products = Map.copyOf(byId);
+        this.baselines = Map.copyOf(baselines);
+    }
+
+    /** Configured baselines by product id (products without one learn theirs). */
+    public Map<String, ProductBaseline> baselines() {
+        return baselines;
     }
 
     /**

@@ -90,7 +90,7 @@ class DriftStreamTest {
         assertThat(expected).anyMatch(a -> a.status() == AlertStatus.RAISED);
     }
 
-    private static void publish(KafkaProducer<byte[], byte[]> producer, String topic, List<Measurement> units) throws Exception {
+    static void publish(KafkaProducer<byte[], byte[]> producer, String topic, List<Measurement> units) throws Exception {
         for (Measurement m : units) {
             ObjectNode r = MAPPER.createObjectNode();
             r.put("sweepId", m.unit());

@@ -26,6 +26,24 @@ class CatalogueFileTest {
     }
 
     @Test
+    void readsAConfiguredBaselineForTheDriftMonitors() throws Exception {
+        Path file = write("{\"products\":[{\"product\":\"cav-x104\",\"baseline\":{\"quMean\":6000,\"quSigma\":90,"
+                + "\"f0MeanHz\":10.4e9,\"f0SigmaHz\":3e6}},{\"product\":\"coax-s36\"}]}");
+        ProductCatalogue c = CatalogueFile.read(file);
+        assertThat(c.baselines()).containsOnlyKeys("cav-x104");
+        ProductBaseline b = c.baselines().get("cav-x104");
+        assertThat(b.quMean()).isEqualTo(6000);
+        assertThat(b.quSigma()).isEqualTo(90);
+        assertThat(b.f0SigmaHz()).isEqualTo(3e6);
+        assertThat(b.insertionLossMeanDb()).isNull();
+        assertError("{\"products\":[{\"product\":\"a\",\"baseline\":{\"quMean\":6000}}]}", "\"quMean\" and \"quSigma\" are required");
+        assertError("{\"products\":[{\"product\":\"a\",\"baseline\":{\"quMean\":6000,\"quSigma\":0}}]}", "must be finite and above 0");
+        assertError("{\"products\":[{\"product\":\"a\",\"baseline\":{\"quMean\":6000,\"quSigma\":9,\"f0MeanHz\":1e9}}]}",
+                "give both or neither");
+        assertError("{\"products\":[{\"product\":\"a\",\"baseline\":{\"qu\":1}}]}", "unknown field \"qu\"");
+    }
+
+    @Test
     void errorsNameTheFileAndTheProblem() throws Exception {
         assertError("{\"products\":[{\"product\":\"a\",\"quMin\":5}]}", "unknown field \"quMin\"");
         assertError("{\"products\":[{\"product\":\"a\",\"qUnloadedMin\":\"high\"}]}", "product 'a': \"qUnloadedMin\" must be a number");
