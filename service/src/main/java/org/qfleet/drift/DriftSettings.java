@@ -13,9 +13,9 @@ import java.util.Objects;
  *                          measured against them (default 10)
  * @param quietPeriod       a lot with no unit for this long (event time) is closed (default 30 min)
  * @param ewmaLambda        EWMA weight (default 0.2)
- * @param ewmaWidth         EWMA limit width L (default 3.3, see {@link #DEFAULT})
+ * @param ewmaWidth         EWMA limit width L (default 3.5, see {@link #DEFAULT})
  * @param cusumK            CUSUM reference value k, in sigma (default 0.5)
- * @param cusumH            CUSUM decision interval h, in sigma (default 7, see {@link #DEFAULT})
+ * @param cusumH            CUSUM decision interval h, in sigma (default 8, see {@link #DEFAULT})
  * @param confirmWithin     charted units within which a station's restarted chart must signal again
  *                          before the station is alerted (default 30; 0 alerts on the first signal)
  * @param closeAfterUnits   a lot is also closed when this many units of the product's other lots
@@ -32,13 +32,14 @@ public record DriftSettings(int learnUnits, int minLotCount, int minReferenceUni
      * with h 5, each with an in-control run length near 500; Lucas & Saccucci 1990, Montgomery):
      * a station carries three charts, its units are measured against a lot reference and a learned
      * baseline that have noise of their own, so those designs alert a healthy station about once
-     * per 130 units. With L 3.3, h 7 and a confirmed signal ({@code confirmWithin} 30) the
-     * simulated rate falls to about one per 5,000 station units, and a shift of 2 sigma is still
-     * reported within about 11-14 of the station's units, 3 sigma within 7-10 (see the drift tests
-     * and DEVELOPERS.md). The published designs stay available: set L, h and confirmWithin.
+     * per 130 units. With L 3.5, h 8 and a confirmed signal ({@code confirmWithin} 30) the
+     * simulated rate falls to about one per 16,000 station units, and a shift of 2 sigma is still
+     * reported within a median 12-15 of the station's units, 3 sigma within 8-11, counted from a
+     * lot start (see the drift tests and DEVELOPERS.md). The published designs stay available:
+     * set L, h and confirmWithin.
      */
-    public static final double STATION_EWMA_WIDTH = 3.3;
-    public static final double STATION_CUSUM_H = 7;
+    public static final double STATION_EWMA_WIDTH = 3.5;
+    public static final double STATION_CUSUM_H = 8;
 
     public static final DriftSettings DEFAULT = new DriftSettings(200, 10, 10, Duration.ofMinutes(30),
             Ewma.DEFAULT_LAMBDA, STATION_EWMA_WIDTH, Cusum.DEFAULT_K, STATION_CUSUM_H, 30, 100, Map.of(), Map.of());

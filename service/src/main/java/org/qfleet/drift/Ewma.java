@@ -44,8 +44,16 @@ public record Ewma(double lambda, double width, double z, double slow, long samp
         return Math.abs(z) > limit();
     }
 
-    /** The chart started afresh (after a signal that waits for confirmation). */
+    /** The chart started afresh after a signal that waits for confirmation; the slow EWMA goes on. */
     public Ewma restarted() {
-        return start(lambda, width);
+        return new Ewma(lambda, width, 0, slow, samples, false);
+    }
+
+    /**
+     * Whether the slow EWMA is outside its recovery band too: a signal that the longer window does
+     * not back is a brief excursion that would clear at once, not a shift worth an alert.
+     */
+    public boolean sustained() {
+        return Math.abs(slow) > RECOVERED_WITHIN;
     }
 }

@@ -100,13 +100,14 @@ public final class StationMonitor {
     }
 
     /**
-     * Rules firing: a chart opens an episode only once a signal is confirmed; once an episode is
-     * open, every chart still signalled keeps it (and adds its rule).
+     * Rules firing: a chart opens an episode only once a signal is confirmed (and, for the EWMA,
+     * backed by its slow companion, {@link Ewma#sustained()}); once an episode is open, every chart
+     * still signalled keeps it (and adds its rule).
      */
     private static Evidence evidence(StationState s, StationInput in) {
         List<Rule> firing = new ArrayList<>();
         boolean charts = s.alerts().open() != null || s.beyondRun() == CONFIRMED;
-        if (charts && s.qu().signalled()) {
+        if (charts && s.qu().signalled() && (s.alerts().open() != null || s.qu().sustained())) {
             firing.add(Rule.QU_EWMA);
         }
         if (charts && s.f0().signalled()) {

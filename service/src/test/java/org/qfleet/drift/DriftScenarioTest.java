@@ -40,7 +40,7 @@ class DriftScenarioTest {
         assertThat(raised).anySatisfy(a -> {
             assertThat(a.kind()).isEqualTo(AlertKind.STATION);
             assertThat(a.subject()).isEqualTo("st-03");
-            assertThat(a.rules()).contains(Rule.COUPLING_CUSUM);
+            assertThat(a.rules()).containsAnyOf(Rule.COUPLING_CUSUM, Rule.F0_CUSUM);
             assertThat(a.breakdown()).extracting(Breakdown::id).contains("L2");
         });
         assertThat(raised).noneMatch(a -> a.kind() == AlertKind.LOT);
@@ -113,11 +113,11 @@ class DriftScenarioTest {
     }
 
     /**
-     * 5,000 in-control units: with the station defaults (EWMA L 3.3, CUSUM h 7, a signal confirmed
+     * 5,000 in-control units: with the station defaults (EWMA L 3.5, CUSUM h 8, a signal confirmed
      * within 30 units; {@link DriftSettings#DEFAULT}) a healthy station is alerted about once per
-     * 5,000 of its units in our simulations, against once per 160 for three charts at the
-     * single-chart designs (Lucas & Saccucci 1990, Montgomery); the test allows one expected
-     * episode plus three Poisson standard deviations. The lot limit at 3.5 standard errors is
+     * 16,000 of its units in our simulations, against once per 160 for three charts at the
+     * single-chart designs (Lucas & Saccucci 1990, Montgomery); the test allows 0.3 expected
+     * episodes plus three Poisson standard deviations. The lot limit at 3.5 standard errors is
      * crossed by about none of 320 simulated in-control lots.
      */
     @Test
@@ -128,9 +128,9 @@ class DriftScenarioTest {
         }
         long station = raisedEpisodes().stream().filter(a -> a.kind() == AlertKind.STATION).count();
         long lot = raisedEpisodes().stream().filter(a -> a.kind() == AlertKind.LOT).count();
-        System.out.printf("5000 in-control units: %d station episodes (designed about 1), %d lot episodes in 25 lots%n",
+        System.out.printf("5000 in-control units: %d station episodes (designed about 0.3), %d lot episodes in 25 lots%n",
                 station, lot);
-        assertThat(station).isLessThanOrEqualTo(4);
+        assertThat(station).isLessThanOrEqualTo(2);
         assertThat(lot).isLessThanOrEqualTo(1);
     }
 
