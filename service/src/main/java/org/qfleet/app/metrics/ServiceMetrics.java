@@ -1,6 +1,7 @@
 package org.qfleet.app.metrics;
 
 import io.micrometer.core.instrument.MeterRegistry;
+import java.util.concurrent.atomic.AtomicBoolean;
 import org.qfleet.drift.Alert;
 import org.qfleet.drift.AlertKind;
 import org.qfleet.drift.Baseline;
@@ -11,14 +12,20 @@ import org.qfleet.stream.RejectCodes;
 import org.qfleet.stream.ServiceObserver;
 import org.qfleet.sweep.Sweep;
 import org.qfleet.verdict.Verdict;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
 
 /**
  * The service's own {@code qfleet_*} meters, fed by the stream as a {@link ServiceObserver}:
  * sweeps, fit time, Qu per product, rejects, open lots, station charts and alerts. Every call is
  * cheap and thread-safe (counters, and volatile values behind gauges that the scrape reads);
  * label values come from closed sets or from bounded, capped sets of products, lots and stations.
+ * A failure here never reaches the stream (it would turn a good sweep into a reject): it is logged
+ * once and the observation is lost.
  */
 public final class ServiceMetrics implements ServiceObserver {
+
+    private static final Logger LOG = LoggerFactory.getLogger(ServiceMetrics.class);
 
     /**
      * How many series sets may exist.
@@ -36,6 +43,7 @@ public final class ServiceMetrics implements ServiceObserver {
     private final LotGauges lots;
     private final StationGauges stations;
     private final AlertMeters alerts;
+    private final AtomicBoolean saidFailure = new AtomicBoolean();
 
     public ServiceMetrics(MeterRegistry registry) {
         this(registry, Caps.DEFAULT);
@@ -51,33 +59,63 @@ public final class ServiceMetrics implements ServiceObserver {
 
     @Override
     public void sweepFitted(Sweep sweep, ResonanceResult result, Verdict verdict, long fitNanos) {
-        sweeps.fitted(verdict.status(), result.method(), fitNanos);
-        unloadedQ.record(sweep.info().product(), result.qUnloaded());
+        try {
+            sweeps.fitted(verdict.status(), result.method(), fitNanos);
+            unloadedQ.record(sweep.info().product(), result.qUnloaded());
+        } catch (RuntimeException e) {
+            failed(e);
+        }
     }
 
     @Override
     public void sweepRejected(String code) {
-        sweeps.rejected(code);
+        try {
+            sweeps.rejected(code);
+        } catch (RuntimeException e) {
+            failed(e);
+        }
     }
 
     @Override
     public void lotUpdated(LotState lot, Baseline baseline) {
-        lots.updated(lot, baseline);
+        try {
+            lots.updated(lot, baseline);
+        } catch (RuntimeException e) {
+            failed(e);
+        }
     }
 
     @Override
     public void lotClosed(String product, String lot) {
-        lots.closed(product, lot);
+        try {
+            lots.closed(product, lot);
+        } catch (RuntimeException e) {
+            failed(e);
+        }
     }
 
     @Override
     public void stationUpdated(StationState station) {
-        stations.updated(station);
+        try {
+            stations.updated(station);
+        } catch (RuntimeException e) {
+            failed(e);
+        }
     }
 
     @Override
     public void alertPublished(Alert alert) {
-        alerts.published(alert);
+        try {
+            alerts.published(alert);
+        } catch (RuntimeException e) {
+            failed(e);
+        }
+    }
+
+    private void failed(RuntimeException e) {
+        if (saidFailure.compareAndSet(false, true)) {
+            LOG.warn("a metric could not be updated (the stream goes on; further failures are not logged): {}", e.toString());
+        }
     }
 
     /** Open lots whose gauges are exported now. */

@@ -1,6 +1,7 @@
 package org.qfleet.app.metrics;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatCode;
 import static org.assertj.core.api.Assertions.within;
 
 import io.micrometer.core.instrument.Counter;
@@ -9,6 +10,8 @@ import io.micrometer.core.instrument.Gauge;
 import io.micrometer.core.instrument.Meter;
 import io.micrometer.core.instrument.Timer;
 import io.micrometer.core.instrument.simple.SimpleMeterRegistry;
+import io.micrometer.prometheusmetrics.PrometheusConfig;
+import io.micrometer.prometheusmetrics.PrometheusMeterRegistry;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
@@ -133,6 +136,28 @@ class ServiceMetricsTest {
 
         assertThat(lotMeters()).isEmpty();
         assertThat(metrics.exportedLots()).isZero();
+    }
+
+    @Test
+    void aClosedLotLeavesNoSampleInThePrometheusScrape() {
+        PrometheusMeterRegistry prometheus = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
+        ServiceMetrics observer = new ServiceMetrics(prometheus);
+        observer.lotUpdated(lot("L1", 12, 5990), BASELINE);
+        observer.lotUpdated(lot("L2", 3, 6010), BASELINE);
+        assertThat(prometheus.scrape()).contains("qfleet_lot_units{lot=\"L1\",product=\"cav-x104\"} 12.0",
+                "qfleet_lot_lower_limit_unloaded_q{lot=\"L1\",product=\"cav-x104\"}");
+
+        observer.lotClosed("cav-x104", "L1");
+
+        assertThat(prometheus.scrape()).doesNotContain("lot=\"L1\"").contains("qfleet_lot_units{lot=\"L2\",product=\"cav-x104\"} 3.0");
+    }
+
+    @Test
+    void aFailedObservationNeverReachesTheStream() {
+        assertThatCode(() -> metrics.sweepFitted(simulated("cav-x104"), null, Verdict.PASS, 1000)).doesNotThrowAnyException();
+        assertThatCode(() -> metrics.lotUpdated(null, BASELINE)).doesNotThrowAnyException();
+        metrics.sweepRejected("fit-failed");
+        assertThat(processed("rejected", "none")).as("later observations still count").isEqualTo(1);
     }
 
     @Test
