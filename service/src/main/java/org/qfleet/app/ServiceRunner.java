@@ -23,8 +23,9 @@ import org.qfleet.stream.TopicSetup;
 import org.qfleet.verdict.ProductCatalogue;
 
 /**
- * Brings the service up in order: the metrics and health endpoints, the embedded broker when no bootstrap servers are configured,
- * a broker that answers, the topics, the running topology; then says once that it is ready.
+ * Brings the service up in order: the metrics and health endpoints, the embedded broker when no
+ * bootstrap servers are configured, a broker that answers, the topics, the running topology; then
+ * says once that it is ready.
  * Closes everything in reverse order, once, whoever asks first (a shutdown hook, the end of a
  * demo, a failure).
  */
