@@ -109,7 +109,7 @@ final class DemoCommand implements Callable<Integer> {
         ServiceConfig config = service.config(spec, defaults);
         PrintWriter err = spec.commandLine().getErr();
         try {
-            return RunCommand.runUntilStopped(LiveDemo.PREFIX, config, service.catalogue(spec, config), err,
+            return RunCommand.runUntilStopped(LiveDemo.PREFIX, config, service.catalogue(spec, config), err, true,
                     new LiveDemo(err, duration, rate, seed, forms, every));
         } finally {
             if (temporary != null) {

@@ -46,19 +46,20 @@ final class RunCommand implements Callable<Integer> {
     public Integer call() {
         ServiceConfig config = options.config(spec);
         ProductCatalogue catalogue = options.catalogue(spec, config);
-        return runUntilStopped(PREFIX, config, catalogue, spec.commandLine().getErr(), null);
+        return runUntilStopped(PREFIX, config, catalogue, spec.commandLine().getErr(), false, null);
     }
 
     /**
      * Starts the service, prints the ready line, and waits until the process is asked to stop
      * (shutdown hook) or the stream fails.
      *
+     * @param httpFallback when the HTTP port is taken, serve metrics and health on a free one instead of failing
      * @param whileRunning work to do once ready, in this thread, or null to just wait; when it
      *                     returns, the service is stopped
      */
     static int runUntilStopped(String prefix, ServiceConfig config, ProductCatalogue catalogue, PrintWriter err,
-            WhileRunning whileRunning) {
-        ServiceRunner runner = new ServiceRunner(prefix, err);
+            boolean httpFallback, WhileRunning whileRunning) {
+        ServiceRunner runner = new ServiceRunner(prefix, err, httpFallback);
         CountDownLatch stopRequested = new CountDownLatch(1);
         CountDownLatch finished = new CountDownLatch(1);
         // On Ctrl-C or SIGTERM: ask the work to end, give it time to finish and report, then close.

@@ -8,6 +8,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.function.Function;
+import org.qfleet.app.http.HttpAddress;
 import org.qfleet.stream.StreamSettings;
 import org.qfleet.stream.Topics;
 import org.qfleet.sweep.SweepLimits;
@@ -26,6 +27,7 @@ import org.qfleet.sweep.SweepLimits;
  * @param otherPartitions    partitions of the rejects and alerts topics when created
  * @param replicationFactor  replication factor of created topics; empty for the broker's default
  * @param productsFile       the product catalogue, or null for the built-in one of the demo plant
+ * @param httpAddress        where the metrics and health endpoints listen; empty when turned off
  */
 record ServiceConfig(
         StreamSettings stream,
@@ -37,7 +39,8 @@ record ServiceConfig(
         int streamPartitions,
         int otherPartitions,
         Optional<Short> replicationFactor,
-        Path productsFile) {
+        Path productsFile,
+        Optional<HttpAddress> httpAddress) {
 
     static final String BOOTSTRAP_SERVERS = "bootstrap.servers";
     /** Kafka Streams' setting for where it keeps its local state. */
@@ -58,12 +61,14 @@ record ServiceConfig(
     static final String BROKER_PORT = "broker.port";
     static final String DATA_DIR = "data.dir";
     static final String CLEAN_START = "clean.start";
+    static final String HTTP_ADDRESS = "http.address";
     /** Keys starting with this pass through to Kafka without it: {@code kafka.security.protocol}. */
     static final String KAFKA_PREFIX = "kafka.";
 
     static final Set<String> KEYS = new TreeSet<>(List.of(BOOTSTRAP_SERVERS, APPLICATION_ID, THREADS, TOPIC_SWEEPS,
             TOPIC_RESULTS, TOPIC_REJECTS, TOPIC_ALERTS, PARTITIONS, REPLICATION_FACTOR, CREATE_TOPICS, MAX_POINTS,
-            MAX_SWEEP_BYTES, REJECT_PAYLOAD_BYTES, PRODUCTS_FILE, BROKER_PORT, DATA_DIR, CLEAN_START));
+            MAX_SWEEP_BYTES, REJECT_PAYLOAD_BYTES, PRODUCTS_FILE, BROKER_PORT, DATA_DIR, CLEAN_START,
+            HTTP_ADDRESS));
 
     static final int DEFAULT_PORT = 9092;
     static final String DEFAULT_DATA_DIR = "qfleet-data";
@@ -123,9 +128,12 @@ record ServiceConfig(
                 ? Optional.of((short) r.integer(REPLICATION_FACTOR, 1, 1))
                 : embedded ? Optional.of((short) 1) : Optional.empty();
         String products = r.text(PRODUCTS_FILE, null);
+        Optional<HttpAddress> http = settings.containsKey(HTTP_ADDRESS)
+                ? r.parse(HTTP_ADDRESS, null, HttpAddress::parse)
+                : Optional.of(HttpAddress.DEFAULT);
         return new ServiceConfig(stream, embedded, port, dataDir,
                 r.flag(CLEAN_START), embedded || r.flag(CREATE_TOPICS), partitions, 1, replication,
-                products == null || products.isBlank() ? null : Path.of(products));
+                products == null || products.isBlank() ? null : Path.of(products), http);
     }
 
     /** Where clients connect; for the embedded broker, known only once it runs. */
@@ -166,7 +174,7 @@ record ServiceConfig(
             });
         }
 
-        private <T> T parse(String key, T fallback, Function<String, T> parser) throws ConfigException {
+        <T> T parse(String key, T fallback, Function<String, T> parser) throws ConfigException {
             ConfigSources.Setting s = settings.get(key);
             if (s == null) {
                 return fallback;

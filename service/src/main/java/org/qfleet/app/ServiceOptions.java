@@ -72,6 +72,10 @@ final class ServiceOptions {
     @Option(names = "--clean-start", description = "Delete the embedded broker's data first.")
     Boolean cleanStart;
 
+    @Option(names = "--http-address", paramLabel = "HOST:PORT",
+            description = "Where /metrics, /health/live and /health/ready listen (default: localhost:9464; port 0 for a free one; off to turn them off).")
+    String httpAddress;
+
     @Option(names = "--kafka", paramLabel = "KEY=VALUE",
             description = "A Kafka client or Streams setting, passed through (repeatable), e.g. --kafka security.protocol=SSL.")
     Map<String, String> kafka;
@@ -94,6 +98,7 @@ final class ServiceOptions {
         put(s, ServiceConfig.BROKER_PORT, brokerPort);
         put(s, ServiceConfig.DATA_DIR, dataDir);
         put(s, ServiceConfig.CLEAN_START, cleanStart);
+        put(s, ServiceConfig.HTTP_ADDRESS, httpAddress);
         if (kafka != null) {
             kafka.forEach((k, v) -> s.put(ServiceConfig.KAFKA_PREFIX + k, v));
         }

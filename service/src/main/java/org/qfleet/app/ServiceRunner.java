@@ -4,21 +4,28 @@ import java.io.PrintWriter;
 import java.time.Duration;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeoutException;
 import java.util.function.BooleanSupplier;
 import org.apache.kafka.clients.admin.Admin;
 import org.apache.kafka.clients.admin.AdminClientConfig;
+import org.apache.kafka.streams.KafkaStreams;
 import org.qfleet.app.broker.BrokerException;
 import org.qfleet.app.broker.EmbeddedBroker;
+import org.qfleet.app.http.HttpEndpoints;
+import org.qfleet.app.http.Readiness;
+import org.qfleet.drift.DriftSettings;
+import org.qfleet.stream.ServiceObserver;
 import org.qfleet.stream.StreamService;
 import org.qfleet.stream.StreamSettings;
 import org.qfleet.stream.TopicSetup;
 import org.qfleet.verdict.ProductCatalogue;
 
 /**
- * Brings the service up in order: the embedded broker when no bootstrap servers are configured,
- * a broker that answers, the topics, the running topology; then says once that it is ready.
+ * Brings the service up in order: the metrics and health endpoints, the embedded broker when no
+ * bootstrap servers are configured, a broker that answers, the topics, the running topology; then
+ * says once that it is ready.
  * Closes everything in reverse order, once, whoever asks first (a shutdown hook, the end of a
  * demo, a failure).
  */
@@ -27,19 +34,27 @@ final class ServiceRunner implements AutoCloseable {
     private static final Duration ADMIN_TIMEOUT = Duration.ofSeconds(10);
     private static final Duration RETRY_EVERY = Duration.ofSeconds(5);
     private static final Duration CLOSE_TIMEOUT = Duration.ofSeconds(30);
+    /** How often the Kafka clients' metrics are looked up again (clients change with rebalances). */
+    private static final Duration KAFKA_METRICS_REFRESH = Duration.ofSeconds(10);
 
     private final String prefix;
     private final PrintWriter err;
+    private final boolean httpFallback;
+    private volatile ServiceEndpoints endpoints;
     private volatile EmbeddedBroker broker;
     private volatile StreamService service;
     private volatile StreamSettings settings;
     private volatile BooleanSupplier stopRequested = () -> false;
     private boolean closed;
 
-    /** @param prefix what starts each message line, e.g. {@code qfleet run: } */
-    ServiceRunner(String prefix, PrintWriter err) {
+    /**
+     * @param prefix       what starts each message line, e.g. {@code qfleet run: }
+     * @param httpFallback when the HTTP port is taken, serve on a free one instead of failing (the demo)
+     */
+    ServiceRunner(String prefix, PrintWriter err, boolean httpFallback) {
         this.prefix = prefix;
         this.err = err;
+        this.httpFallback = httpFallback;
     }
 
     /**
@@ -53,6 +68,11 @@ final class ServiceRunner implements AutoCloseable {
             throws ServiceException, InterruptedException {
         stopRequested = stop;
         settings = config.stream();
+        if (config.httpAddress().isPresent()) {
+            endpoints = ServiceEndpoints.start(config.httpAddress().get(), httpFallback, this::readiness);
+            err.println(prefix + endpoints.line());
+            err.flush();
+        }
         if (config.embedded()) {
             try {
                 broker = EmbeddedBroker.start(config.dataDir(), config.brokerPort(), config.cleanStart());
@@ -69,8 +89,13 @@ final class ServiceRunner implements AutoCloseable {
             prepareTopics(admin, config);
         }
         checkStop();
-        StreamService started = StreamService.start(settings, catalogue);
+        ServiceEndpoints e = endpoints;
+        StreamService started = StreamService.start(settings, catalogue, DriftSettings.DEFAULT,
+                e == null ? ServiceObserver.NONE : e.observer());
         service = started;
+        if (e != null) {
+            started.bindMetrics(e.registry(), KAFKA_METRICS_REFRESH);
+        }
         boolean saidWaiting = false;
         while (!started.awaitRunning(RETRY_EVERY)) {
             checkStop();
@@ -93,6 +118,22 @@ final class ServiceRunner implements AutoCloseable {
 
     private synchronized boolean isClosed() {
         return closed;
+    }
+
+    /** Ready while the topology runs: partitions assigned, processing (not while rebalancing). */
+    Readiness readiness() {
+        StreamService s = service;
+        if (s == null) {
+            return new Readiness(false, "starting");
+        }
+        KafkaStreams.State state = s.state();
+        return new Readiness(state == KafkaStreams.State.RUNNING, "Kafka Streams state " + state);
+    }
+
+    /** The HTTP server of the metrics and health endpoints, to mount more on; empty when turned off. */
+    Optional<HttpEndpoints> http() {
+        ServiceEndpoints e = endpoints;
+        return e == null ? Optional.empty() : Optional.of(e.http());
     }
 
     /** Where the service reads and writes, for the ready line. */
@@ -135,6 +176,10 @@ final class ServiceRunner implements AutoCloseable {
         EmbeddedBroker b = broker;
         if (b != null) {
             b.close();
+        }
+        ServiceEndpoints e = endpoints;
+        if (e != null) {
+            e.close();
         }
     }
 

@@ -1,7 +1,12 @@
 package org.qfleet.stream;
 
+import io.micrometer.core.instrument.MeterRegistry;
+import io.micrometer.core.instrument.binder.kafka.KafkaStreamsMetrics;
 import java.time.Duration;
+import java.util.List;
 import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.Executors;
+import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.TimeUnit;
 import org.apache.kafka.streams.KafkaStreams;
 import org.apache.kafka.streams.errors.StreamsUncaughtExceptionHandler.StreamThreadExceptionResponse;
@@ -22,6 +27,8 @@ public final class StreamService implements AutoCloseable {
     private final KafkaStreams streams;
     private final CountDownLatch running = new CountDownLatch(1);
     private final CountDownLatch failed = new CountDownLatch(1);
+    private KafkaStreamsMetrics clientMetrics;
+    private ScheduledExecutorService clientMetricsRefresh;
 
     private StreamService(KafkaStreams streams) {
         this.streams = streams;
@@ -90,9 +97,33 @@ public final class StreamService implements AutoCloseable {
         return streams.state();
     }
 
+    /**
+     * Exports the metrics of Kafka Streams and of its Kafka clients (consumer lag, commit rates,
+     * ...) to {@code registry} until this service is closed. Clients come and go with rebalances
+     * and replaced threads: their metrics are looked up again every {@code refresh}.
+     */
+    public synchronized void bindMetrics(MeterRegistry registry, Duration refresh) {
+        if (clientMetrics != null) {
+            throw new IllegalStateException("the Kafka metrics are bound already");
+        }
+        clientMetricsRefresh = Executors.newSingleThreadScheduledExecutor(r -> {
+            Thread t = new Thread(r, "qfleet-kafka-metrics");
+            t.setDaemon(true);
+            return t;
+        });
+        clientMetrics = new KafkaStreamsMetrics(streams, List.of(), clientMetricsRefresh, refresh);
+        clientMetrics.bindTo(registry);
+    }
+
     /** Stops processing, commits what is done and leaves the group; waits at most {@code timeout}. */
     public void close(Duration timeout) {
         streams.close(new KafkaStreams.CloseOptions().timeout(timeout).leaveGroup(true));
+        synchronized (this) {
+            if (clientMetrics != null) {
+                clientMetrics.close();
+                clientMetricsRefresh.shutdownNow();
+            }
+        }
     }
 
     @Override

@@ -24,7 +24,9 @@ final class ServiceProcess implements AutoCloseable {
     static ServiceProcess start(Path log, String... runArguments) throws IOException {
         List<String> command = new ArrayList<>(List.of(
                 Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-Xmx256m", "-cp", System.getProperty("java.class.path"), "org.qfleet.app.Main", "run"));
+                "-Xmx256m", "-cp", System.getProperty("java.class.path"), "org.qfleet.app.Main", "run",
+                // A free port for the metrics and health endpoints: the default one may be taken on a shared machine.
+                "--http-address", "localhost:0"));
         command.addAll(List.of(runArguments));
         Process p = new ProcessBuilder(command).redirectErrorStream(true).redirectOutput(log.toFile()).start();
         return new ServiceProcess(p, log);
