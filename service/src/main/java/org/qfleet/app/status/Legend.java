@@ -4,7 +4,7 @@ package org.qfleet.app.status;
 final class Legend {
 
     private static final double SAMPLE = 18;
-    private static final double CHAR_WIDTH = 6.2;
+    private static final double CHAR_WIDTH = 6.4;
 
     private final SvgWriter svg;
     private final double y;
@@ -19,7 +19,7 @@ final class Legend {
     Legend entry(String lineClass, String name) {
         svg.line(x, y - 4, x + SAMPLE, y - 4, lineClass);
         svg.text(x + SAMPLE + 4, y, "start", "ch-legend", name);
-        x += SAMPLE + 4 + name.length() * CHAR_WIDTH + 12;
+        x += SAMPLE + 4 + name.length() * CHAR_WIDTH + 16;
         return this;
     }
 }

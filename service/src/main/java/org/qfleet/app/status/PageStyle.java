@@ -22,7 +22,7 @@ final class PageStyle {
             ".notice.good{background:#edf7ee;border-left:5px solid #2e7d32}",
             ".notice ul{margin:4px 0 0;padding-left:20px}",
             ".cards{display:grid;grid-template-columns:repeat(auto-fill,minmax(490px,1fr));gap:12px}",
-            ".cards.wide{grid-template-columns:repeat(auto-fill,minmax(780px,1fr))}",
+            ".cards.wide{grid-template-columns:repeat(auto-fill,minmax(600px,1fr))}",
             ".card{background:#fff;border:1px solid #dde1e6;border-radius:6px;padding:8px 10px;margin:0}",
             ".card.alerted{border:2px solid #c62828;background:#fff6f5}",
             ".card figcaption{font-size:13px;margin-bottom:4px}",

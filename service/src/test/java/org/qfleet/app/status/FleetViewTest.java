@@ -38,6 +38,16 @@ class FleetViewTest {
     }
 
     @Test
+    void lotsLeaveTheViewWhenTheLotMonitorClosesThem() {
+        PlantFeed feed = new PlantFeed(PlantValues.settings(), view);
+        PlantValues plant = new PlantValues(5, 4);
+        feed.measurements(plant.lot("L1", 100, 1.0));
+        feed.measurements(plant.lot("L2", 100, 1.0));
+        assertThat(view.snapshot().lots()).as("L1 closed after the quiet period of 30 minutes")
+                .extracting(LotView::lot).containsExactly("L2");
+    }
+
+    @Test
     void openLotsBeyondTheBoundGiveWayLeastRecentlyUpdatedFirstAndAreListedNewestFirst() {
         for (int lot = 0; lot < 40; lot++) {
             feedLot(view, String.format(Locale.ROOT, "L%02d", lot), 3);
