@@ -12,7 +12,8 @@ import org.qfleet.drift.AlertStatus;
 
 /**
  * The most recent alert messages and the alerts raised now (the newest message of every key that
- * has not been cleared), both bounded: the oldest give way. Not thread-safe.
+ * has not been cleared), both bounded: the oldest give way. A message older than one already seen
+ * for its key (a transaction processed again) does not bring back an alert. Not thread-safe.
  */
 final class AlertLog {
 
@@ -20,6 +21,7 @@ final class AlertLog {
     private final int maxRaised;
     private final ArrayDeque<Alert> recent = new ArrayDeque<>();
     private final LinkedHashMap<String, Alert> raised = new LinkedHashMap<>();
+    private final LinkedHashMap<String, Integer> clearedRevisions = new LinkedHashMap<>();
 
     AlertLog(int maxRecent, int maxRaised) {
         if (maxRecent < 1 || maxRaised < 1) {
@@ -37,16 +39,24 @@ final class AlertLog {
         }
         if (alert.status() == AlertStatus.CLEARED) {
             raised.remove(alert.key());
+            clearedRevisions.remove(alert.key());
+            clearedRevisions.put(alert.key(), alert.revision());
+            dropOldest(clearedRevisions, maxRaised);
             return;
         }
         Alert known = raised.get(alert.key());
-        if (known != null && known.revision() > alert.revision()) {
+        Integer cleared = clearedRevisions.get(alert.key());
+        if ((known != null && known.revision() > alert.revision()) || (cleared != null && cleared > alert.revision())) {
             return;
         }
         raised.remove(alert.key());
         raised.put(alert.key(), alert);
-        Iterator<Map.Entry<String, Alert>> oldest = raised.entrySet().iterator();
-        while (raised.size() > maxRaised) {
+        dropOldest(raised, maxRaised);
+    }
+
+    private static void dropOldest(LinkedHashMap<String, ?> map, int max) {
+        Iterator<? extends Map.Entry<String, ?>> oldest = map.entrySet().iterator();
+        while (map.size() > max) {
             oldest.next();
             oldest.remove();
         }

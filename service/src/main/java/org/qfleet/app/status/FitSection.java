@@ -5,6 +5,7 @@ import org.qfleet.app.plot.ResonancePlot;
 import org.qfleet.fit.QualityFlag;
 import org.qfleet.fit.ResonanceResult;
 import org.qfleet.sweep.SweepInfo;
+import org.qfleet.verdict.Verdict;
 import org.qfleet.verdict.VerdictReason;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -14,7 +15,19 @@ final class FitSection {
 
     private static final Logger LOG = LoggerFactory.getLogger(FitSection.class);
 
+    /** Sweeps with more points are not drawn: the page is fetched every few seconds and should stay light. */
+    static final int MAX_PLOTTED_POINTS = 5001;
+
     private final ResonancePlot plot = new ResonancePlot();
+    private final int maxPlottedPoints;
+
+    FitSection() {
+        this(MAX_PLOTTED_POINTS);
+    }
+
+    FitSection(int maxPlottedPoints) {
+        this.maxPlottedPoints = maxPlottedPoints;
+    }
 
     String render(LastFit fit) {
         if (fit == null) {
@@ -35,9 +48,13 @@ final class FitSection {
                 .append(fact("f0", Html.number(r.f0Hz() / 1e9, 6) + " GHz"))
                 .append(fact("flags", r.flags().isEmpty() ? "none"
                         : r.flags().stream().map(QualityFlag::code).collect(Collectors.joining(", "))))
-                .append(fact("verdict", fit.verdict().status().code() + (fit.verdict().reasons().isEmpty() ? ""
-                        : ": " + fit.verdict().reasons().stream().map(VerdictReason::code).collect(Collectors.joining(", ")))))
+                .append(fact("verdict", verdict(fit.verdict())))
                 .append("</dl>\n<div class=\"fit-plot-box\">\n");
+        if (fit.sweep().size() > maxPlottedPoints) {
+            return html.append("<p class=\"empty\">The sweep has ").append(fit.sweep().size())
+                    .append(" points, too many to draw on this page; at most ").append(maxPlottedPoints)
+                    .append(" are drawn.</p>\n</div>\n").toString();
+        }
         try {
             html.append(inline(plot.render(fit.sweep(), r)));
         } catch (RuntimeException e) {
@@ -54,6 +71,14 @@ final class FitSection {
             svg = svg.substring(svg.indexOf("?>") + 2).strip();
         }
         return svg.replaceFirst("^<svg ", "<svg id=\"fit-plot\" class=\"fit-plot\" ");
+    }
+
+    private static String verdict(Verdict v) {
+        if (v == null) {
+            return null;
+        }
+        return v.status().code() + (v.reasons().isEmpty() ? ""
+                : ": " + v.reasons().stream().map(VerdictReason::code).collect(Collectors.joining(", ")));
     }
 
     private static String fact(String name, String value) {

@@ -44,7 +44,9 @@ public final class FleetView implements ServiceObserver {
             if (lots < 1 || stations < 1 || pointsPerChart < ThinnedSeries.MIN_CAPACITY || recentAlerts < 1
                     || raisedAlerts < 1 || rejectCodes < 1) {
                 throw new IllegalArgumentException("every bound of the status view must be at least 1 (and "
-                        + ThinnedSeries.MIN_CAPACITY + " points per chart), got " + this);
+                        + ThinnedSeries.MIN_CAPACITY + " points per chart), got lots " + lots + ", stations " + stations
+                        + ", points per chart " + pointsPerChart + ", recent alerts " + recentAlerts + ", raised alerts "
+                        + raisedAlerts + ", reject codes " + rejectCodes);
             }
         }
     }
@@ -89,7 +91,7 @@ public final class FleetView implements ServiceObserver {
         fitted.incrementAndGet();
         lastFit = new LastFit(sweep, result, verdict);
         synchronized (lock) {
-            verdicts.merge(verdict.status().code(), 1L, Long::sum);
+            verdicts.merge(verdict == null ? "none" : verdict.status().code(), 1L, Long::sum);
         }
     }
 

@@ -2,8 +2,8 @@ package org.qfleet.app.status;
 
 import java.time.Instant;
 import java.util.HashSet;
-import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
 import java.util.stream.Collectors;
 import org.qfleet.drift.Alert;
 import org.qfleet.drift.AlertKind;
@@ -82,8 +82,9 @@ final class StatusHtml {
                 .append(tile("alerts raised", s.raisedAlerts().size(), !s.raisedAlerts().isEmpty()))
                 .append("</ul>\n");
         if (!s.rejectsByCode().isEmpty()) {
-            html.append("<p class=\"rejects\">Rejects by reason: ").append(Html.escape(s.rejectsByCode().entrySet().stream()
-                    .map(Map.Entry::toString).collect(Collectors.joining(", ")).replace('=', ' '))).append("</p>\n");
+            html.append("<p class=\"rejects\">Rejects by reason: ").append(Html.escape(new TreeMap<>(s.rejectsByCode())
+                    .entrySet().stream().map(e -> e.getKey() + " " + e.getValue()).collect(Collectors.joining(", "))))
+                    .append("</p>\n");
         }
     }
 

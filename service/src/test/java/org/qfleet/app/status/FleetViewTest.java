@@ -1,6 +1,7 @@
 package org.qfleet.app.status;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.util.List;
 import java.util.Locale;
@@ -136,6 +137,20 @@ class FleetViewTest {
         assertThat(s.recentAlerts().get(0).subject()).isEqualTo("L18");
         assertThat(s.raisedAlerts()).extracting(Alert::subject).containsExactly("L19", "L17");
         assertThat(s.raisedAlerts().get(0).revision()).isEqualTo(2);
+    }
+
+    @Test
+    void aMessageSeenAgainAfterItsAlertClearedDoesNotRaiseItAgain() {
+        view.alertPublished(lotAlert("L1", AlertStatus.RAISED, 1));
+        view.alertPublished(lotAlert("L1", AlertStatus.CLEARED, 2));
+        view.alertPublished(lotAlert("L1", AlertStatus.RAISED, 1));
+        assertThat(view.snapshot().raisedAlerts()).isEmpty();
+        assertThat(view.snapshot().recentAlerts()).hasSize(3);
+    }
+
+    @Test
+    void boundsBelowOneAreRefusedWithTheValuesGiven() {
+        assertThatThrownBy(() -> new FleetView.Limits(0, 1, 10, 1, 1, 1)).hasMessageContaining("got lots 0, stations 1");
     }
 
     @Test
