@@ -55,8 +55,9 @@ final class LotChart {
                 hi = Math.max(hi, v);
             }
         }
+        double pad = hi > lo ? 0.04 * (hi - lo) : 0;
         ChartPanel panel = new ChartPanel(LEFT, TOP, PLOT_WIDTH, PLOT_HEIGHT, NiceRange.covering(0, maxUnits, 6),
-                NiceRange.covering(lo, hi, 5));
+                NiceRange.covering(lo - pad, hi + pad, 5));
         panel.drawAxes(svg, "trusted units in the lot", "mean Qu");
         if (Double.isFinite(lot.mu0())) {
             svg.line(panel.left(), panel.py(lot.mu0()), panel.right(), panel.py(lot.mu0()), "mu0-line");

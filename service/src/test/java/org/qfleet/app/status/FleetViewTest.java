@@ -154,6 +154,46 @@ class FleetViewTest {
     }
 
     @Test
+    void streamThreadsAndPageRequestsAtOnceKeepTheViewConsistentAndBounded() throws Exception {
+        FleetView shared = new FleetView(SMALL);
+        List<Thread> threads = new java.util.ArrayList<>();
+        java.util.concurrent.ConcurrentLinkedQueue<Throwable> failures = new java.util.concurrent.ConcurrentLinkedQueue<>();
+        for (int t = 0; t < 3; t++) {
+            int thread = t;
+            threads.add(new Thread(() -> {
+                for (int lot = 0; lot < 60; lot++) {
+                    feedLot(shared, "T" + thread + "-L" + lot, 40);
+                    shared.stationUpdated(station("st-" + thread + "-" + lot % 7, lot + 1, null));
+                    shared.alertPublished(lotAlert("T" + thread + "-L" + lot, AlertStatus.RAISED, 1));
+                    if (lot % 2 == 0) {
+                        shared.lotClosed(PlantValues.PRODUCT, "T" + thread + "-L" + lot);
+                    }
+                }
+            }));
+        }
+        threads.add(new Thread(() -> {
+            for (int i = 0; i < 300; i++) {
+                FleetSnapshot s = shared.snapshot();
+                assertThat(s.lots()).hasSizeLessThanOrEqualTo(SMALL.lots());
+                assertThat(s.stations()).hasSizeLessThanOrEqualTo(SMALL.stations());
+                assertThat(s.recentAlerts()).hasSizeLessThanOrEqualTo(SMALL.recentAlerts());
+                assertThat(s.raisedAlerts()).hasSizeLessThanOrEqualTo(SMALL.raisedAlerts());
+                s.lots().forEach(l -> assertThat(l.points()).hasSizeLessThanOrEqualTo(SMALL.pointsPerChart()));
+            }
+        }));
+        threads.forEach(t -> t.setUncaughtExceptionHandler((th, e) -> failures.add(e)));
+        threads.forEach(Thread::start);
+        for (Thread t : threads) {
+            t.join();
+        }
+        assertThat(failures).isEmpty();
+        List<LotView> open = shared.snapshot().lots();
+        assertThat(open).hasSize(SMALL.lots());
+        assertThat(open).as("closed lots (the even ones) are gone")
+                .allSatisfy(l -> assertThat(Integer.parseInt(l.lot().substring(l.lot().indexOf('L') + 1)) % 2).isEqualTo(1));
+    }
+
+    @Test
     void countsSweepsAndRejectsWithABoundedNumberOfCodes() {
         view.sweepRejected("invalid-json");
         view.sweepRejected("invalid-json");
