@@ -4,7 +4,7 @@ package org.qfleet.app.status;
 final class Legend {
 
     private static final double SAMPLE = 18;
-    private static final double CHAR_WIDTH = 6.4;
+    private static final double CHAR_WIDTH = 6.6;
 
     private final SvgWriter svg;
     private final double y;

@@ -15,7 +15,7 @@ import java.util.function.ToDoubleFunction;
  */
 final class StationChart {
 
-    static final int WIDTH = 760;
+    static final int WIDTH = 800;
     static final int HEIGHT = 260;
     private static final double TOP = 34;
     private static final double PLOT_WIDTH = 290;
@@ -72,7 +72,7 @@ final class StationChart {
             svg.text(WIDTH / 2.0, TOP + PLOT_HEIGHT / 2, "middle", "ch-note", "no charted unit yet");
         }
         new Legend(svg, EWMA_LEFT, 18).entry("ewma-z", "EWMA").entry("ewma-limit", "\u00b1 limit");
-        new Legend(svg, CUSUM_LEFT - 30, 18).entry("cusum-f0-upper", "f0 +").entry("cusum-f0-lower", "f0 \u2212")
+        new Legend(svg, CUSUM_LEFT - 40, 18).entry("cusum-f0-upper", "f0 +").entry("cusum-f0-lower", "f0 \u2212")
                 .entry("cusum-coupling-upper", "coupling +").entry("cusum-coupling-lower", "coupling \u2212")
                 .entry("cusum-h", "h");
         return svg.finish();
