@@ -32,6 +32,7 @@ final class PageStyle {
             "table.alert-table{border-collapse:collapse;width:100%;background:#fff;font-size:13px}",
             ".alert-table th,.alert-table td{padding:5px 8px;border-bottom:1px solid #e4e7eb;text-align:left;vertical-align:top}",
             ".alert-table th{background:#e9edf2}",
+            ".alert-table td.time,.alert-table td.status,.alert-table td.product,.alert-table td.subject{white-space:nowrap}",
             ".alert-table tr.open{background:#fff3f1}",
             ".alert-table tr.raised td.status{color:#c62828;font-weight:600}",
             ".alert-table tr.cleared td.status{color:#2e7d32}",

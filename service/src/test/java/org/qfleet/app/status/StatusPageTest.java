@@ -53,6 +53,8 @@ class StatusPageTest {
 
         assertThat(response.statusCode()).isEqualTo(200);
         assertThat(response.headers().firstValue("Content-Type")).hasValue("text/html; charset=utf-8");
+        assertThat(response.headers().firstValue("Content-Security-Policy")).hasValueSatisfying(
+                policy -> assertThat(policy).contains("default-src 'none'").doesNotContain("script-src"));
         PageDocument page = PageDocument.parse(response.body());
         assertThat(page.elements("meta", null)).anySatisfy(m -> {
             assertThat(m.getAttribute("http-equiv")).isEqualTo("refresh");
