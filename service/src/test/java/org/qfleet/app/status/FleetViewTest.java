@@ -3,9 +3,11 @@ package org.qfleet.app.status;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.concurrent.ConcurrentLinkedQueue;
 import org.junit.jupiter.api.Test;
 import org.qfleet.drift.Alert;
 import org.qfleet.drift.AlertKind;
@@ -156,8 +158,8 @@ class FleetViewTest {
     @Test
     void streamThreadsAndPageRequestsAtOnceKeepTheViewConsistentAndBounded() throws Exception {
         FleetView shared = new FleetView(SMALL);
-        List<Thread> threads = new java.util.ArrayList<>();
-        java.util.concurrent.ConcurrentLinkedQueue<Throwable> failures = new java.util.concurrent.ConcurrentLinkedQueue<>();
+        List<Thread> threads = new ArrayList<>();
+        ConcurrentLinkedQueue<Throwable> failures = new ConcurrentLinkedQueue<>();
         for (int t = 0; t < 3; t++) {
             int thread = t;
             threads.add(new Thread(() -> {
