@@ -7,6 +7,7 @@ metric names the service exposes, and that the topic jobs create the four topics
 Prints one line per problem and exits with 1 when there is any.
 
 Usage: python3 deploy/check_structure.py [DEPLOY_DIR]
+       python3 deploy/check_structure.py DEPLOY_DIR --dashboard-queries-as-rules FILE
 """
 
 import json
@@ -488,7 +489,26 @@ def check_grafana_provisioning(docs):
             problem("grafana/provisioning/dashboards", f"provider path {path} does not hold the mounted dashboard")
 
 
+def dashboard_queries_as_rules(docs, out):
+    """Writes every dashboard query, with the Grafana variables replaced by sample values, as
+    recording rules, so that promtool can check their PromQL syntax."""
+    values = {"__rate_interval": "1m", "__interval": "1m", "__range": "1h"}
+    rules = []
+    for rel in sorted(docs):
+        if rel.parent != Path("grafana") or rel.suffix != ".json":
+            continue
+        for panel in docs[rel][0].get("panels", []):
+            for t in panel.get("targets") or []:
+                expr = re.sub(r"\$\{?(\w+)\}?", lambda m: values.get(m.group(1), ".*"), t.get("expr", ""))
+                rules.append({"record": f"dashboard:panel_{panel.get('id')}:{t.get('refId')}", "expr": expr})
+    Path(out).write_text(yaml.safe_dump({"groups": [{"name": "dashboard-queries", "rules": rules}]}), encoding="utf-8")
+
+
 def main():
+    if len(sys.argv) == 4 and sys.argv[2] == "--dashboard-queries-as-rules":
+        deploy = Path(sys.argv[1])
+        dashboard_queries_as_rules(load_all(deploy), sys.argv[3])
+        return 0
     deploy = Path(sys.argv[1] if len(sys.argv) > 1 else Path(__file__).resolve().parent)
     docs = load_all(deploy)
     rules = docs.get(Path("prometheus/qfleet-rules.yml"))
