@@ -158,7 +158,8 @@ def check_dashboard(rel, dash, recorded):
     variables = {v.get("name"): v for v in dash.get("templating", {}).get("list", [])}
     for name, var in variables.items():
         if var.get("type") == "query":
-            query = var.get("definition") or var.get("query", {}).get("query", "")
+            query = var.get("query", "")
+            query = query.get("query", "") if isinstance(query, dict) else query
             m = re.fullmatch(r"\s*label_values\((.*),\s*(\w+)\s*\)\s*", query)
             if not m:
                 problem(rel, f"variable {name}: expected a label_values(metric, label) query, got '{query}'")
