@@ -15,26 +15,32 @@ import org.qfleet.app.http.ReadinessHandler;
 import org.qfleet.app.metrics.JvmMeters;
 import org.qfleet.app.metrics.ReadyGauge;
 import org.qfleet.app.metrics.ServiceMetrics;
+import org.qfleet.app.status.FleetView;
+import org.qfleet.app.status.StatusPage;
+import org.qfleet.stream.ObserverGroup;
 import org.qfleet.stream.ServiceObserver;
 
 /**
- * The service's metrics and health, served over HTTP: a Prometheus registry with the JVM's and
- * the service's meters, and the endpoints {@code /metrics}, {@code /health/live} and
- * {@code /health/ready}; more handlers can be mounted on {@link #http()}.
+ * The service's metrics, health and status page, served over HTTP: a Prometheus registry with the
+ * JVM's and the service's meters, the endpoints {@code /metrics}, {@code /health/live} and
+ * {@code /health/ready}, and the status page at {@code /}; more handlers can be mounted on
+ * {@link #http()}.
  */
 final class ServiceEndpoints implements AutoCloseable {
 
+    static final String STATUS_PATH = "/";
+
     private final PrometheusMeterRegistry registry;
     private final JvmMeters jvm;
-    private final ServiceMetrics metrics;
+    private final ServiceObserver observer;
     private final HttpEndpoints http;
     private final String fallbackNote;
 
-    private ServiceEndpoints(PrometheusMeterRegistry registry, JvmMeters jvm, ServiceMetrics metrics, HttpEndpoints http,
+    private ServiceEndpoints(PrometheusMeterRegistry registry, JvmMeters jvm, ServiceObserver observer, HttpEndpoints http,
             String fallbackNote) {
         this.registry = registry;
         this.jvm = jvm;
-        this.metrics = metrics;
+        this.observer = observer;
         this.http = http;
         this.fallbackNote = fallbackNote;
     }
@@ -61,10 +67,12 @@ final class ServiceEndpoints implements AutoCloseable {
         JvmMeters jvm = new JvmMeters(registry);
         ServiceMetrics metrics = new ServiceMetrics(registry);
         ReadyGauge.bind(registry, () -> readiness.get().ready());
+        FleetView fleet = new FleetView();
         http.mount(MetricsHandler.PATH, new MetricsHandler(registry))
                 .mount(LivenessHandler.PATH, new LivenessHandler())
-                .mount(ReadinessHandler.PATH, new ReadinessHandler(readiness));
-        return new ServiceEndpoints(registry, jvm, metrics, http, note);
+                .mount(ReadinessHandler.PATH, new ReadinessHandler(readiness))
+                .mount(STATUS_PATH, new StatusPage(fleet));
+        return new ServiceEndpoints(registry, jvm, ObserverGroup.of(metrics, fleet), http, note);
     }
 
     private static HttpEndpoints bind(HttpAddress address, boolean fallBack) throws HttpStartException {
@@ -78,8 +86,9 @@ final class ServiceEndpoints implements AutoCloseable {
         }
     }
 
+    /** Feeds the metrics and the status page. */
     ServiceObserver observer() {
-        return metrics;
+        return observer;
     }
 
     MeterRegistry registry() {
@@ -91,10 +100,10 @@ final class ServiceEndpoints implements AutoCloseable {
         return http;
     }
 
-    /** One line saying where the metrics and the health checks are. */
+    /** One line saying where the status page, the metrics and the health checks are. */
     String line() {
         String base = http.baseUrl();
-        return "metrics: " + base + MetricsHandler.PATH + ", health: " + base + LivenessHandler.PATH + " and "
+        return "status page: " + base + STATUS_PATH + ", metrics: " + base + MetricsHandler.PATH + ", health: " + base + LivenessHandler.PATH + " and "
                 + base + ReadinessHandler.PATH + (fallbackNote == null ? "" : " (" + fallbackNote + ")");
     }
 

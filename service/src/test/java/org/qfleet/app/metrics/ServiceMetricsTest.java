@@ -23,6 +23,7 @@ import org.qfleet.drift.AlertTracker;
 import org.qfleet.drift.Baseline;
 import org.qfleet.drift.Cusum;
 import org.qfleet.drift.Ewma;
+import org.qfleet.drift.ExcludedShare;
 import org.qfleet.drift.LotState;
 import org.qfleet.drift.LotStatistics;
 import org.qfleet.drift.Rule;
@@ -286,7 +287,7 @@ class ServiceMetricsTest {
     }
 
     private static StationState station(String id, Ewma qu, Cusum f0, Cusum level) {
-        return new StationState("cav-x104", id, qu, f0, level, 0, List.of(), AlertTracker.idle(AlertKind.STATION, "cav-x104", id));
+        return new StationState("cav-x104", id, qu, f0, level, 0, ExcludedShare.NONE, 0, List.of(), AlertTracker.idle(AlertKind.STATION, "cav-x104", id));
     }
 
     private static Alert alert(AlertKind kind, String subject, int episode, AlertStatus status, int revision) {

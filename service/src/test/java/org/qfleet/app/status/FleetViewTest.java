@@ -16,6 +16,7 @@ import org.qfleet.drift.AlertTracker;
 import org.qfleet.drift.Baseline;
 import org.qfleet.drift.Cusum;
 import org.qfleet.drift.Ewma;
+import org.qfleet.drift.ExcludedShare;
 import org.qfleet.drift.LotState;
 import org.qfleet.drift.LotStatistics;
 import org.qfleet.drift.Measurement;
@@ -241,7 +242,7 @@ class FleetViewTest {
             ewma = ewma.plus(0.5);
             cusum = cusum.plus(1.0);
         }
-        return new StationState(PlantValues.PRODUCT, id, ewma, cusum, cusum, 0, List.of(),
+        return new StationState(PlantValues.PRODUCT, id, ewma, cusum, cusum, 0, ExcludedShare.NONE, 0, List.of(),
                 new AlertTracker(AlertKind.STATION, PlantValues.PRODUCT, id, open == null ? 0 : 1, open));
     }
 
