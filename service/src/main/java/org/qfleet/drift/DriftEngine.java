@@ -16,6 +16,7 @@ public final class DriftEngine implements LotMonitor.LotStore {
     private final Map<String, ProductState> products = new HashMap<>();
     private final Map<String, LotState> lotStates = new HashMap<>();
     private final Map<String, StationState> stationStates = new HashMap<>();
+    private final Map<String, StationAlerts> stationAlerts = new HashMap<>();
 
     public DriftEngine(DriftSettings settings) {
         this.lots = new LotMonitor(settings);
@@ -29,8 +30,9 @@ public final class DriftEngine implements LotMonitor.LotStore {
         List<Alert> alerts = new ArrayList<>(outcome.alerts());
         StationInput in = outcome.forward();
         String key = in.product() + "/" + in.station();
-        StationMonitor.Step step = stations.accept(stationStates.get(key), in);
+        StationMonitor.Step step = stations.accept(stationStates.get(key), stationAlerts.get(in.station()), in);
         stationStates.put(key, step.state());
+        stationAlerts.put(in.station(), step.alerts());
         step.message().ifPresent(alerts::add);
         return alerts;
     }

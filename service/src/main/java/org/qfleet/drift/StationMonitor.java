@@ -22,7 +22,9 @@ import java.util.Optional;
  * rarely signals that soon, while a real shift gives the second signal after about the chart's
  * own run length again: the station is reported after roughly twice the published delay
  * (common practice: act on a repeated signal, as with two-of-three run rules). An open alert
- * holds while any chart is still signalled and clears when all are back. The share of excluded
+ * holds while any chart is still signalled and clears when all are back. Charts are kept per
+ * product and station (each product has its own baseline), the alert per station
+ * ({@link StationAlerts}): one fixture fault is one alert, whichever products show it. The share of excluded
  * units is watched too. Charts take units in arrival order; a retest is one more measurement for
  * the station. Stateless itself.
  */
@@ -37,13 +39,18 @@ public final class StationMonitor {
         this.settings = settings;
     }
 
-    /** The station's next state and the alert message to publish, if any. */
-    public record Step(StationState state, Optional<Alert> message) {
+    /** The charts' next state, the station's next alert state, and the alert message to publish, if any. */
+    public record Step(StationState state, StationAlerts alerts, Optional<Alert> message) {
     }
 
-    /** @param state the station's state, null for a station not seen before */
-    public Step accept(StationState state, StationInput in) {
+    /**
+     * @param state  the charts of the unit's product on its station, null when not seen before
+     * @param alerts the station's alert state (shared by its products), null when not seen before
+     */
+    public Step accept(StationState state, StationAlerts alerts, StationInput in) {
         StationState s = state == null ? StationState.start(in.product(), in.station(), settings) : state;
+        StationAlerts a = alerts == null ? StationAlerts.start(in.station()) : alerts;
+        boolean open = a.tracker().open() != null;
         ExcludedShare exclusions = s.exclusions().plus(!in.trusted());
         long excluded = s.excluded() + (in.trusted() ? 0 : 1);
         Ewma qu = s.qu();
@@ -58,7 +65,7 @@ public final class StationMonitor {
             lots = Double.isFinite(in.quDev()) ? recentLots(lots, in.lot(), in.quDev()) : lots;
             boolean charted = Double.isFinite(in.quDev()) || Double.isFinite(in.f0Dev()) || Double.isFinite(in.levelDev());
             boolean beyond = qu.beyondLimit() || f0.beyondLimit() || level.beyondLimit();
-            if (charted && s.alerts().open() == null && settings.confirmWithin() > 0) {
+            if (charted && !open && settings.confirmWithin() > 0) {
                 if (beyond && run == 0) {
                     // a first signal: restart the charts that gave it and wait for a second one
                     qu = qu.beyondLimit() ? qu.restarted() : qu;
@@ -70,17 +77,17 @@ public final class StationMonitor {
                 } else if (run > 0) {
                     run--;
                 }
-            } else if (s.alerts().open() != null || settings.confirmWithin() == 0) {
+            } else if (open || settings.confirmWithin() == 0) {
                 run = beyond ? CONFIRMED : 0;
             }
         }
         StationState next = new StationState(s.product(), s.station(), qu, f0, level, excluded, exclusions, run, lots,
-                s.alerts());
+                a.tracker());
         if (in.baseline() == null) {
-            return new Step(next, Optional.empty());
+            return new Step(next, a, Optional.empty());
         }
-        AlertTracker.Step step = s.alerts().observe(evidence(next, in));
-        return new Step(next.withAlerts(step.tracker()), step.message());
+        StationAlerts.Step step = a.observe(in.product(), evidence(next, in, open));
+        return new Step(next.withAlerts(step.alerts().tracker()), step.alerts(), step.tracked().message());
     }
 
     private static List<LotDeviation> recentLots(List<LotDeviation> recent, String lot, double dev) {
@@ -104,10 +111,10 @@ public final class StationMonitor {
      * backed by its slow companion, {@link Ewma#sustained()}); once an episode is open, every chart
      * still signalled keeps it (and adds its rule).
      */
-    private static Evidence evidence(StationState s, StationInput in) {
+    private static Evidence evidence(StationState s, StationInput in, boolean open) {
         List<Rule> firing = new ArrayList<>();
-        boolean charts = s.alerts().open() != null || s.beyondRun() == CONFIRMED;
-        if (charts && s.qu().signalled() && (s.alerts().open() != null || s.qu().sustained())) {
+        boolean charts = open || s.beyondRun() == CONFIRMED;
+        if (charts && s.qu().signalled() && (open || s.qu().sustained())) {
             firing.add(Rule.QU_EWMA);
         }
         if (charts && s.f0().signalled()) {

@@ -23,7 +23,7 @@ import org.qfleet.verdict.ProductLimits;
  * The drift part of the topology: results are read back from the results topic, repartitioned by
  * product to the lot stage (product baseline and the product's lots: the baseline is learned from
  * units of all lots and stations, so it lives with them), whose station inputs are repartitioned
- * by product/station to the station stage. Both stages keep their state in persistent key-value
+ * by station to the station stage (charts per product and station, one alert state per station). Both stages keep their state in persistent key-value
  * stores with changelog topics, under the service's exactly-once processing, so a restart resumes
  * with the same statistics and alert states. Alerts go to the alerts topic keyed by alert key.
  */
@@ -32,6 +32,7 @@ final class DriftTopology {
     static final String PRODUCTS_STORE = "drift-products";
     static final String LOTS_STORE = "drift-lots";
     static final String STATIONS_STORE = "drift-stations";
+    static final String STATION_ALERTS_STORE = "drift-station-alerts";
 
     private DriftTopology() {
     }
@@ -64,6 +65,7 @@ final class DriftTopology {
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(PRODUCTS_STORE), Serdes.String(), Serdes.ByteArray()));
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(LOTS_STORE), Serdes.String(), Serdes.ByteArray()));
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(STATIONS_STORE), Serdes.String(), Serdes.ByteArray()));
+        builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(STATION_ALERTS_STORE), Serdes.String(), Serdes.ByteArray()));
         KStream<String, byte[]> lotOut = builder.stream(topics.results(), Consumed.with(Serdes.ByteArray(), Serdes.ByteArray()))
                 .flatMap((key, value) -> {
                     Optional<Measurement> m = value == null ? Optional.empty() : DriftJson.measurement(value);
@@ -75,7 +77,7 @@ final class DriftTopology {
                 .to(topics.alerts(), Produced.with(Serdes.String(), Serdes.ByteArray()));
         lotOut.filter((k, v) -> DriftRecords.isStationInput(v)).mapValues(DriftRecords::untagged)
                 .repartition(Repartitioned.with(Serdes.String(), Serdes.ByteArray()).withName("drift-by-station"))
-                .process(() -> new StationStageProcessor(stationMonitor, observer), STATIONS_STORE)
+                .process(() -> new StationStageProcessor(stationMonitor, observer), STATIONS_STORE, STATION_ALERTS_STORE)
                 .to(topics.alerts(), Produced.with(Serdes.String(), Serdes.ByteArray()));
     }
 }

@@ -15,7 +15,7 @@ import org.qfleet.drift.ProductState;
 /**
  * The lot stage, on measurements keyed by product: {@link LotMonitor} with the product states and
  * the lot states in changelogged stores. Forwards alert messages (keyed by alert key) and station
- * inputs (keyed by product/station), told apart by {@link DriftRecords}.
+ * inputs (keyed by station), told apart by {@link DriftRecords}.
  */
 final class LotStageProcessor extends ContextualProcessor<String, byte[], String, byte[]> {
 
@@ -69,7 +69,6 @@ final class LotStageProcessor extends ContextualProcessor<String, byte[], String
         }
         updated.forEach(lot -> observer.lotUpdated(lot, outcome.product().baseline()));
         closed.forEach(lot -> observer.lotClosed(m.product(), lot));
-        String stationKey = m.product() + "/" + m.station();
-        context().forward(record.withKey(stationKey).withValue(DriftRecords.stationInput(DriftJson.write(outcome.forward()))));
+        context().forward(record.withKey(m.station()).withValue(DriftRecords.stationInput(DriftJson.write(outcome.forward()))));
     }
 }

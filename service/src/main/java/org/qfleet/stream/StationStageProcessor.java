@@ -4,16 +4,22 @@ import org.apache.kafka.streams.processor.api.ContextualProcessor;
 import org.apache.kafka.streams.processor.api.ProcessorContext;
 import org.apache.kafka.streams.processor.api.Record;
 import org.apache.kafka.streams.state.KeyValueStore;
+import org.qfleet.drift.StationAlerts;
 import org.qfleet.drift.StationInput;
 import org.qfleet.drift.StationMonitor;
 import org.qfleet.drift.StationState;
 
-/** The station stage, on station inputs keyed by product/station: {@link StationMonitor} with a changelogged store. */
+/**
+ * The station stage, on station inputs keyed by station: {@link StationMonitor} with the charts of
+ * each product on the station (store key product/station) and the station's shared alert state
+ * (store key station) in changelogged stores.
+ */
 final class StationStageProcessor extends ContextualProcessor<String, byte[], String, byte[]> {
 
     private final StationMonitor monitor;
     private final AlertJson alertJson = new AlertJson();
     private KeyValueStore<String, byte[]> stations;
+    private KeyValueStore<String, byte[]> stationAlerts;
 
     private final ServiceObserver observer;
 
@@ -26,13 +32,17 @@ final class StationStageProcessor extends ContextualProcessor<String, byte[], St
     public void init(ProcessorContext<String, byte[]> context) {
         super.init(context);
         stations = context.getStateStore(DriftTopology.STATIONS_STORE);
+        stationAlerts = context.getStateStore(DriftTopology.STATION_ALERTS_STORE);
     }
 
     @Override
     public void process(Record<String, byte[]> record) {
         StationInput in = DriftJson.read(record.value(), StationInput.class);
-        StationMonitor.Step step = monitor.accept(DriftJson.read(stations.get(record.key()), StationState.class), in);
-        stations.put(record.key(), DriftJson.write(step.state()));
+        String chartsKey = in.product() + "/" + in.station();
+        StationMonitor.Step step = monitor.accept(DriftJson.read(stations.get(chartsKey), StationState.class),
+                DriftJson.read(stationAlerts.get(in.station()), StationAlerts.class), in);
+        stations.put(chartsKey, DriftJson.write(step.state()));
+        stationAlerts.put(in.station(), DriftJson.write(step.alerts()));
         observer.stationUpdated(step.state());
         step.message().ifPresent(a -> {
             context().forward(record.withKey(a.key()).withValue(alertJson.write(a)));

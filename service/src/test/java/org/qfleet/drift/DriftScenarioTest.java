@@ -185,6 +185,37 @@ class DriftScenarioTest {
     }
 
     @Test
+    void aFaultyStationTestingTwoProductsIsOneStationAlert() {
+        PlantValues a = new PlantValues(22, 4);
+        PlantValues b = new PlantValues(23, 4);
+        PlantValues.Fault loose = new PlantValues.Fault(0, 0, 4 * PlantValues.LEVEL_SIGMA);
+        List<Measurement> units = new ArrayList<>();
+        interleave(units, a.lot("A1", 240, 1.0), asProductB(b.lot("B1", 240, 1.0)));
+        interleave(units, a.lot("A2", 200, 1.0, "st-02", loose), asProductB(b.lot("B2", 200, 1.0, "st-02", loose)));
+        feedAndCollect(units);
+        List<Alert> st02 = alerts.stream().filter(x -> x.subject().equals("st-02")).toList();
+        assertThat(st02).isNotEmpty();
+        assertThat(st02).extracting(Alert::key).containsOnly(st02.get(0).key());
+        assertThat(raisedEpisodes()).filteredOn(x -> x.kind() == AlertKind.STATION).hasSize(1);
+    }
+
+    private static List<Measurement> asProductB(List<Measurement> units) {
+        return units.stream().map(m -> new Measurement("cav-test-b", m.lot(), m.station(), m.unit(), m.measuredAt(), m.qUnloaded(),
+                m.f0Hz(), m.levelDb(), m.flags())).toList();
+    }
+
+    private static void interleave(List<Measurement> into, List<Measurement> first, List<Measurement> second) {
+        for (int i = 0; i < Math.max(first.size(), second.size()); i++) {
+            if (i < first.size()) {
+                into.add(first.get(i));
+            }
+            if (i < second.size()) {
+                into.add(second.get(i));
+            }
+        }
+    }
+
+    @Test
     void aLotClosesWhenEnoughUnitsOfOtherLotsFollowedIt() {
         engine = new DriftEngine(PlantValues.settings().withQuietPeriod(Duration.ofDays(7)));
         PlantValues plant = new PlantValues(20, 4);

@@ -28,7 +28,11 @@ class AlertSchemaTest {
         JsonSchema schema = Schemas.load("alert.schema.json");
         PlantValues plant = new PlantValues(5, 4);
         List<Measurement> units = new ArrayList<>(plant.lot("L1", 100, 1.0));
-        units.addAll(plant.lot("L2", 150, 0.93, "st-02", new PlantValues.Fault(0, 0, 3)));
+        // a lot 2.5 % low (an X-bar signal), then 7 % (below the lot limit too: an update), with a faulty station
+        units.addAll(plant.lot("L2", 60, 0.975, "st-02", new PlantValues.Fault(0, 0, 3)));
+        units.addAll(plant.lot("L2", 90, 0.93, "st-02", new PlantValues.Fault(0, 0, 3)).stream()
+                .map(m -> new Measurement(m.product(), m.lot(), m.station(), m.unit() + "-b", m.measuredAt(), m.qUnloaded(),
+                        m.f0Hz(), m.levelDb(), m.flags())).toList());
         plant.pause(120);
         units.addAll(plant.lot("L3", 20, 1.0));
         DriftEngine engine = new DriftEngine(PlantValues.settings());

@@ -126,11 +126,11 @@ class ServiceMetricsTest {
         assertThat(registry.find("qfleet.lot.lower.limit.unloaded.q").gauges()).as("no limit without a baseline").isEmpty();
 
         metrics.lotUpdated(lot("L1", 4, 5950), BASELINE);
-        // X-bar limit 6000 - 3 * 100 / sqrt(4) = 5850 lies below the lot limit 5900: the lot limit binds.
+        // X-bar limit 6000 - 3.5 * 100 / sqrt(4) = 5825 lies below the lot limit 5900: the lot limit binds.
         assertThat(lotGauge("qfleet.lot.lower.limit.unloaded.q", "L1")).isEqualTo(5900);
         metrics.lotUpdated(lot("L1", 100, 5990), BASELINE);
-        // With 100 units the X-bar limit 6000 - 3 * 100 / 10 = 5970 is the higher one.
-        assertThat(lotGauge("qfleet.lot.lower.limit.unloaded.q", "L1")).isCloseTo(5970, within(1e-9));
+        // With 100 units the X-bar limit 6000 - 3.5 * 100 / 10 = 5965 is the higher one.
+        assertThat(lotGauge("qfleet.lot.lower.limit.unloaded.q", "L1")).isCloseTo(5965, within(1e-9));
         assertThat(lotGauge("qfleet.lot.units", "L1")).isEqualTo(100);
 
         metrics.lotClosed("cav-x104", "L1");

@@ -1,6 +1,7 @@
 package org.qfleet.app.status;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.util.ArrayList;
@@ -71,7 +72,8 @@ class FleetViewTest {
         assertThat(points.get(points.size() - 1).units()).isEqualTo(1000);
         assertThat(points).extracting(LotPoint::units).isSorted().doesNotHaveDuplicates();
         LotPoint last = points.get(points.size() - 1);
-        assertThat(last.xbarLimit()).isEqualTo(BASELINE.quMean() - 3 * BASELINE.quSigma() / Math.sqrt(1000));
+        // a configured baseline: mu0 - 3.5 sigma0 / sqrt(n)
+        assertThat(last.xbarLimit()).isCloseTo(BASELINE.quMean() - 3.5 * BASELINE.quSigma() / Math.sqrt(1000), within(1e-9));
     }
 
     @Test

@@ -11,6 +11,7 @@ import org.qfleet.drift.LotMonitor;
 import org.qfleet.drift.LotState;
 import org.qfleet.drift.Measurement;
 import org.qfleet.drift.ProductState;
+import org.qfleet.drift.StationAlerts;
 import org.qfleet.drift.StationMonitor;
 import org.qfleet.drift.StationState;
 import org.qfleet.fit.FitException;
@@ -39,6 +40,7 @@ final class PlantFeed {
     private final Map<String, ProductState> products = new HashMap<>();
     private final Map<String, LotState> lots = new HashMap<>();
     private final Map<String, StationState> stations = new HashMap<>();
+    private final Map<String, StationAlerts> stationAlerts = new HashMap<>();
     private final List<Alert> alerts = new ArrayList<>();
 
     PlantFeed(DriftSettings settings, ServiceObserver observer) {
@@ -108,8 +110,9 @@ final class PlantFeed {
         updated.forEach(lot -> observer.lotUpdated(lot, outcome.product().baseline()));
         closed.forEach(lot -> observer.lotClosed(m.product(), lot));
         String key = m.product() + "/" + m.station();
-        StationMonitor.Step step = stationMonitor.accept(stations.get(key), outcome.forward());
+        StationMonitor.Step step = stationMonitor.accept(stations.get(key), stationAlerts.get(m.station()), outcome.forward());
         stations.put(key, step.state());
+        stationAlerts.put(m.station(), step.alerts());
         observer.stationUpdated(step.state());
         step.message().ifPresent(this::publish);
     }

@@ -176,7 +176,7 @@ class StatusPageTest {
      */
     static FleetView plantView() throws Exception {
         FleetView view = new FleetView();
-        PlantFeed feed = new PlantFeed(PlantValues.settings().withQuietPeriod(Duration.ofDays(1)), view);
+        PlantFeed feed = new PlantFeed(PlantValues.settings().withQuietPeriod(Duration.ofDays(1)).withCloseAfterUnits(0), view);
         PlantValues plant = new PlantValues(21, 4);
         feed.measurements(plant.lot("L1", 150, 1.0));
         feed.measurements(plant.lot("L3", 100, 1.0, LOOSE_STATION, PlantValues.Fault.LOOSE_CONNECTOR));
