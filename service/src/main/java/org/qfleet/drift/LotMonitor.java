@@ -23,13 +23,19 @@ import java.util.function.Function;
  */
 public final class LotMonitor {
 
-    /** Where lot states are kept. */
+    /** Where lot states, and the values of their units, are kept. */
     public interface LotStore {
         LotState get(String product, String lot);
 
         void put(LotState state);
 
+        /** Deletes the lot and its units' values. */
         void delete(String product, String lot);
+
+        /** The unit's value in its lot's statistics, or null when the unit is new to the lot. */
+        UnitValue unit(String product, String lot, String unit);
+
+        void putUnit(String product, String lot, String unit, UnitValue value);
     }
 
     /** The product's next state, alerts to publish, and the unit for the station monitor. */
@@ -59,7 +65,7 @@ public final class LotMonitor {
         }
         StationInput forward = stationInput(m, p.baseline(), lot == null ? LotStatistics.EMPTY : lot.stats());
         if (lot != null) {
-            lot = update(lot, m);
+            lot = update(lot, m, lots);
             if (p.baseline() != null) {
                 AlertTracker.Step step = lot.alerts().observe(evidence(lot, p.baseline(), m.measuredAt()));
                 step.message().ifPresent(alerts::add);
@@ -75,13 +81,17 @@ public final class LotMonitor {
         return new Outcome(p, alerts, forward);
     }
 
-    private LotState update(LotState lot, Measurement m) {
+    private LotState update(LotState lot, Measurement m, LotStore lots) {
         long lastTime = Math.max(lot.lastEventTime(), m.measuredAt());
         if (!m.trusted()) {
             return new LotState(lot.product(), lot.lot(), lot.stats(), lot.excluded() + 1, lot.retests(), lastTime, lot.alerts());
         }
-        long retests = lot.retests() + (lot.stats().units().containsKey(m.unit()) ? 1 : 0);
-        return new LotState(lot.product(), lot.lot(), lot.stats().plus(m), lot.excluded(), retests, lastTime, lot.alerts());
+        UnitValue earlier = lots.unit(m.product(), m.lot(), m.unit());
+        UnitValue now = UnitValue.of(m);
+        lots.putUnit(m.product(), m.lot(), m.unit(), now);
+        long retests = lot.retests() + (earlier != null ? 1 : 0);
+        return new LotState(lot.product(), lot.lot(), lot.stats().plus(now, earlier), lot.excluded(), retests, lastTime,
+                lot.alerts());
     }
 
     private ProductState closeQuietLots(ProductState p, String current, LotStore lots, List<Alert> alerts) {

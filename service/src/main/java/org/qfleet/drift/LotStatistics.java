@@ -8,19 +8,18 @@ import java.util.TreeMap;
  * A lot's trusted units: Qu count, mean and variance (Welford) over the lot and per station, with
  * f0 and the coupling level per station besides. A retest (the same unit again) replaces the
  * unit's earlier value: the lot's statistics describe its units, each once, as last measured.
- * Immutable.
+ * The units' own values are kept apart ({@link LotMonitor.LotStore#unit}), so this record stays
+ * small however large the lot. Immutable.
  *
  * @param qu        Qu over the whole lot
  * @param byStation statistics per station
- * @param units     each unit's value in the statistics
  */
-public record LotStatistics(Welford qu, Map<String, StationShare> byStation, Map<String, UnitValue> units) {
+public record LotStatistics(Welford qu, Map<String, StationShare> byStation) {
 
-    public static final LotStatistics EMPTY = new LotStatistics(Welford.EMPTY, Map.of(), Map.of());
+    public static final LotStatistics EMPTY = new LotStatistics(Welford.EMPTY, Map.of());
 
     public LotStatistics {
         byStation = Map.copyOf(byStation);
-        units = Map.copyOf(units);
     }
 
     public long count() {
@@ -35,12 +34,10 @@ public record LotStatistics(Welford qu, Map<String, StationShare> byStation, Map
         return qu.variance();
     }
 
-    /** With the trusted measurement {@code m} in, replacing the unit's earlier value if it had one. */
-    public LotStatistics plus(Measurement m) {
+    /** With the trusted value {@code now} in, replacing {@code earlier}, the unit's earlier value, if not null. */
+    public LotStatistics plus(UnitValue now, UnitValue earlier) {
         Map<String, StationShare> stations = new HashMap<>(byStation);
-        Map<String, UnitValue> values = new HashMap<>(units);
         Welford total = qu;
-        UnitValue earlier = values.get(m.unit());
         if (earlier != null) {
             total = total.minus(earlier.qUnloaded());
             StationShare share = stations.get(earlier.station()).minus(earlier);
@@ -50,10 +47,8 @@ public record LotStatistics(Welford qu, Map<String, StationShare> byStation, Map
                 stations.put(earlier.station(), share);
             }
         }
-        UnitValue now = UnitValue.of(m);
-        values.put(m.unit(), now);
-        stations.put(m.station(), stations.getOrDefault(m.station(), StationShare.EMPTY).plus(now));
-        return new LotStatistics(total.plus(m.qUnloaded()), stations, values);
+        stations.put(now.station(), stations.getOrDefault(now.station(), StationShare.EMPTY).plus(now));
+        return new LotStatistics(total.plus(now.qUnloaded()), stations);
     }
 
     /** The lot's units measured on every station but {@code station}. */

@@ -21,7 +21,7 @@ import java.util.Map;
 public record ProductState(String product, Baseline baseline, BaselineLearner learner, Map<String, Long> openLots,
         long latestEventTime, List<String> closedLots, long units, Map<String, Long> openLotUnits) {
 
-    public static final int CLOSED_LOTS_KEPT = 200;
+    public static final int CLOSED_LOTS_KEPT = 50;
 
     public ProductState {
         openLots = Map.copyOf(openLots);

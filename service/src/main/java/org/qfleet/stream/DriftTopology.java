@@ -31,6 +31,7 @@ final class DriftTopology {
 
     static final String PRODUCTS_STORE = "drift-products";
     static final String LOTS_STORE = "drift-lots";
+    static final String UNITS_STORE = "drift-units";
     static final String STATIONS_STORE = "drift-stations";
     static final String STATION_ALERTS_STORE = "drift-station-alerts";
 
@@ -64,6 +65,7 @@ final class DriftTopology {
         StationMonitor stationMonitor = new StationMonitor(drift);
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(PRODUCTS_STORE), Serdes.String(), Serdes.ByteArray()));
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(LOTS_STORE), Serdes.String(), Serdes.ByteArray()));
+        builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(UNITS_STORE), Serdes.String(), Serdes.ByteArray()));
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(STATIONS_STORE), Serdes.String(), Serdes.ByteArray()));
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(STATION_ALERTS_STORE), Serdes.String(), Serdes.ByteArray()));
         KStream<String, byte[]> lotOut = builder.stream(topics.results(), Consumed.with(Serdes.ByteArray(), Serdes.ByteArray()))
@@ -72,7 +74,7 @@ final class DriftTopology {
                     return m.map(x -> List.of(KeyValue.pair(x.product(), DriftJson.write(x)))).orElse(List.of());
                 })
                 .repartition(Repartitioned.with(Serdes.String(), Serdes.ByteArray()).withName("drift-by-product"))
-                .process(() -> new LotStageProcessor(lotMonitor, observer), PRODUCTS_STORE, LOTS_STORE);
+                .process(() -> new LotStageProcessor(lotMonitor, observer), PRODUCTS_STORE, LOTS_STORE, UNITS_STORE);
         lotOut.filter((k, v) -> DriftRecords.isAlert(v)).mapValues(DriftRecords::untagged)
                 .to(topics.alerts(), Produced.with(Serdes.String(), Serdes.ByteArray()));
         lotOut.filter((k, v) -> DriftRecords.isStationInput(v)).mapValues(DriftRecords::untagged)

@@ -1,20 +1,17 @@
 package org.qfleet.stream;
 
-import java.util.ArrayList;
-import java.util.List;
 import org.apache.kafka.streams.processor.api.ContextualProcessor;
 import org.apache.kafka.streams.processor.api.ProcessorContext;
 import org.apache.kafka.streams.processor.api.Record;
 import org.apache.kafka.streams.state.KeyValueStore;
 import org.qfleet.drift.Alert;
 import org.qfleet.drift.LotMonitor;
-import org.qfleet.drift.LotState;
 import org.qfleet.drift.Measurement;
 import org.qfleet.drift.ProductState;
 
 /**
- * The lot stage, on measurements keyed by product: {@link LotMonitor} with the product states and
- * the lot states in changelogged stores. Forwards alert messages (keyed by alert key) and station
+ * The lot stage, on measurements keyed by product: {@link LotMonitor} with the product states, the
+ * lot states and their units' values in changelogged stores. Forwards alert messages (keyed by alert key) and station
  * inputs (keyed by station), told apart by {@link DriftRecords}.
  */
 final class LotStageProcessor extends ContextualProcessor<String, byte[], String, byte[]> {
@@ -22,7 +19,7 @@ final class LotStageProcessor extends ContextualProcessor<String, byte[], String
     private final LotMonitor monitor;
     private final AlertJson alertJson = new AlertJson();
     private KeyValueStore<String, byte[]> products;
-    private KeyValueStore<String, byte[]> lots;
+    private LotStores lots;
 
     private final ServiceObserver observer;
 
@@ -35,40 +32,21 @@ final class LotStageProcessor extends ContextualProcessor<String, byte[], String
     public void init(ProcessorContext<String, byte[]> context) {
         super.init(context);
         products = context.getStateStore(DriftTopology.PRODUCTS_STORE);
-        lots = context.getStateStore(DriftTopology.LOTS_STORE);
+        lots = new LotStores(context.getStateStore(DriftTopology.LOTS_STORE), context.getStateStore(DriftTopology.UNITS_STORE));
     }
 
     @Override
     public void process(Record<String, byte[]> record) {
         Measurement m = DriftJson.read(record.value(), Measurement.class);
         ProductState before = DriftJson.read(products.get(m.product()), ProductState.class);
-        List<LotState> updated = new ArrayList<>();
-        List<String> closed = new ArrayList<>();
-        LotMonitor.Outcome outcome = monitor.accept(before, m, new LotMonitor.LotStore() {
-            @Override
-            public LotState get(String product, String lot) {
-                return DriftJson.read(lots.get(product + "/" + lot), LotState.class);
-            }
-
-            @Override
-            public void put(LotState state) {
-                lots.put(state.product() + "/" + state.lot(), DriftJson.write(state));
-                updated.add(state);
-            }
-
-            @Override
-            public void delete(String product, String lot) {
-                lots.delete(product + "/" + lot);
-                closed.add(lot);
-            }
-        });
+        LotMonitor.Outcome outcome = monitor.accept(before, m, lots);
         products.put(m.product(), DriftJson.write(outcome.product()));
         for (Alert a : outcome.alerts()) {
             context().forward(record.withKey(a.key()).withValue(DriftRecords.alert(alertJson.write(a))));
             observer.alertPublished(a);
         }
-        updated.forEach(lot -> observer.lotUpdated(lot, outcome.product().baseline()));
-        closed.forEach(lot -> observer.lotClosed(m.product(), lot));
+        lots.drainUpdated().forEach(lot -> observer.lotUpdated(lot, outcome.product().baseline()));
+        lots.drainClosed().forEach(lot -> observer.lotClosed(m.product(), lot));
         context().forward(record.withKey(m.station()).withValue(DriftRecords.stationInput(DriftJson.write(outcome.forward()))));
     }
 }

@@ -282,7 +282,7 @@ class ServiceMetricsTest {
     }
 
     private static LotState lot(String id, long n, double mean) {
-        LotStatistics stats = new LotStatistics(n == 0 ? Welford.EMPTY : new Welford(n, mean, 0), Map.of(), Map.of());
+        LotStatistics stats = new LotStatistics(n == 0 ? Welford.EMPTY : new Welford(n, mean, 0), Map.of());
         return new LotState("cav-x104", id, stats, 0, 0, 0, AlertTracker.idle(AlertKind.LOT, "cav-x104", id));
     }
 

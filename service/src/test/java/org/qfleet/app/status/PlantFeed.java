@@ -6,14 +6,9 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.qfleet.drift.Alert;
+import org.qfleet.drift.DriftEngine;
 import org.qfleet.drift.DriftSettings;
-import org.qfleet.drift.LotMonitor;
-import org.qfleet.drift.LotState;
 import org.qfleet.drift.Measurement;
-import org.qfleet.drift.ProductState;
-import org.qfleet.drift.StationAlerts;
-import org.qfleet.drift.StationMonitor;
-import org.qfleet.drift.StationState;
 import org.qfleet.fit.FitException;
 import org.qfleet.fit.QualityFlag;
 import org.qfleet.fit.ResonanceAnalyzer;
@@ -35,18 +30,12 @@ final class PlantFeed {
     private final ServiceObserver observer;
     private final ResonanceAnalyzer analyzer = new ResonanceAnalyzer();
     private final ProductCatalogue catalogue = ProductCatalogue.demoPlant();
-    private final LotMonitor lotMonitor;
-    private final StationMonitor stationMonitor;
-    private final Map<String, ProductState> products = new HashMap<>();
-    private final Map<String, LotState> lots = new HashMap<>();
-    private final Map<String, StationState> stations = new HashMap<>();
-    private final Map<String, StationAlerts> stationAlerts = new HashMap<>();
+    private final DriftEngine engine;
     private final List<Alert> alerts = new ArrayList<>();
 
     PlantFeed(DriftSettings settings, ServiceObserver observer) {
         this.observer = observer;
-        this.lotMonitor = new LotMonitor(settings);
-        this.stationMonitor = new StationMonitor(settings);
+        this.engine = new DriftEngine(settings);
     }
 
     /** The demo plant's catalogue: its Qu lower limits are the products' lot limits, as in the service. */
@@ -85,36 +74,12 @@ final class PlantFeed {
     }
 
     void measurement(Measurement m) {
-        List<LotState> updated = new ArrayList<>();
-        List<String> closed = new ArrayList<>();
-        LotMonitor.Outcome outcome = lotMonitor.accept(products.get(m.product()), m, new LotMonitor.LotStore() {
-            @Override
-            public LotState get(String product, String lot) {
-                return lots.get(product + "/" + lot);
-            }
-
-            @Override
-            public void put(LotState state) {
-                lots.put(state.product() + "/" + state.lot(), state);
-                updated.add(state);
-            }
-
-            @Override
-            public void delete(String product, String lot) {
-                lots.remove(product + "/" + lot);
-                closed.add(lot);
-            }
-        });
-        products.put(m.product(), outcome.product());
-        outcome.alerts().forEach(this::publish);
-        updated.forEach(lot -> observer.lotUpdated(lot, outcome.product().baseline()));
-        closed.forEach(lot -> observer.lotClosed(m.product(), lot));
-        String key = m.product() + "/" + m.station();
-        StationMonitor.Step step = stationMonitor.accept(stations.get(key), stationAlerts.get(m.station()), outcome.forward());
-        stations.put(key, step.state());
-        stationAlerts.put(m.station(), step.alerts());
-        observer.stationUpdated(step.state());
-        step.message().ifPresent(this::publish);
+        DriftEngine.Update u = engine.update(m);
+        u.lotAlerts().forEach(this::publish);
+        u.lotsUpdated().forEach(lot -> observer.lotUpdated(lot, u.baseline()));
+        u.lotsClosed().forEach(lot -> observer.lotClosed(m.product(), lot));
+        observer.stationUpdated(u.station());
+        u.stationAlert().ifPresent(this::publish);
     }
 
     private void publish(Alert a) {
