@@ -32,10 +32,11 @@ class StatisticsTest {
 
     @Test
     void aRetestReplacesTheUnitsEarlierValue() {
+        UnitValue first = UnitValue.of(unit("u1", "st-01", 6000));
         LotStatistics s = LotStatistics.EMPTY
-                .plus(unit("u1", "st-01", 6000))
-                .plus(unit("u2", "st-02", 6100))
-                .plus(unit("u1", "st-02", 5900));
+                .plus(first, null)
+                .plus(UnitValue.of(unit("u2", "st-02", 6100)), null)
+                .plus(UnitValue.of(unit("u1", "st-02", 5900)), first);
         assertThat(s.count()).isEqualTo(2);
         assertThat(s.mean()).isCloseTo(6000, offset(1e-9));
         assertThat(s.byStation()).containsOnlyKeys("st-02");

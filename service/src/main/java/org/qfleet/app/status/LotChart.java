@@ -5,11 +5,13 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The control chart of one open lot as inline SVG: the lot's mean Qu against the units so far,
- * with the X-bar lower limit mu0 - 3 sigma0 / sqrt(n) (Shewhart; Montgomery) that narrows as units
- * arrive, the product's lot limit and the baseline mean mu0; points below a limit are marked.
- * Classes: {@code lot-mean} (one vertex per kept point), {@code xbar-limit}, {@code lot-limit},
- * {@code mu0-line}, {@code below-limit}.
+ * The control chart of one open or recently closed lot as inline SVG: the lot's mean Qu against the
+ * units so far, with the X-bar lower limit mu0 - L sigma0 / sqrt(n) (Shewhart; Montgomery; L and the
+ * widening for a learned baseline as in {@link org.qfleet.drift.Baseline#xbarLowerLimit}) that
+ * narrows as units arrive, the product's lot limit and the baseline mean mu0; points below a limit
+ * are marked. The chart's classes: {@code lot-chart}, {@code closed-lot} once the lot closed,
+ * {@code alerted} when {@link LotView#highlighted()}. Series classes: {@code lot-mean} (one vertex
+ * per kept point), {@code xbar-limit}, {@code lot-limit}, {@code mu0-line}, {@code below-limit}.
  */
 final class LotChart {
 
@@ -24,7 +26,7 @@ final class LotChart {
     String render(LotView lot, String id) {
         Map<String, String> attributes = new LinkedHashMap<>();
         attributes.put("id", id);
-        attributes.put("class", lot.alerted() ? "lot-chart alerted" : "lot-chart");
+        attributes.put("class", "lot-chart" + (lot.closed() ? " closed-lot" : "") + (lot.highlighted() ? " alerted" : ""));
         attributes.put("data-product", lot.product());
         attributes.put("data-lot", lot.lot());
         SvgWriter svg = new SvgWriter(WIDTH, HEIGHT, attributes,

@@ -2,6 +2,7 @@ package org.qfleet.app.status;
 
 import java.time.Instant;
 import java.util.HashSet;
+import java.util.List;
 import java.util.Set;
 import java.util.TreeMap;
 import java.util.stream.Collectors;
@@ -37,19 +38,9 @@ final class StatusHtml {
         summary(html, s);
         attention(html, s, ids);
 
-        html.append("<section id=\"lots\">\n<h2>Open lots (").append(s.lots().size()).append(")</h2>\n");
-        if (s.lots().isEmpty()) {
-            html.append("<p class=\"empty\">No open lot.</p>\n");
-        } else {
-            html.append("<div class=\"cards\">\n");
-            for (LotView lot : s.lots()) {
-                html.append("<figure class=\"card lot-card").append(lot.alerted() ? " alerted" : "").append("\">\n<figcaption>")
-                        .append(lotCaption(lot)).append("</figcaption>\n")
-                        .append(lotChart.render(lot, ids.lot(lot.product(), lot.lot()))).append("\n</figure>\n");
-            }
-            html.append("</div>\n");
-        }
-        html.append("</section>\n<section id=\"stations\">\n<h2>Stations (").append(s.stations().size()).append(")</h2>\n");
+        lotSection(html, "lots", "Open lots", "No open lot.", s.lots(), ids);
+        lotSection(html, "closed-lots", "Recently closed lots", "No lot closed recently.", s.closedLots(), ids);
+        html.append("<section id=\"stations\">\n<h2>Stations (").append(s.stations().size()).append(")</h2>\n");
         if (s.stations().isEmpty()) {
             html.append("<p class=\"empty\">No station has reported yet.</p>\n");
         } else {
@@ -69,6 +60,24 @@ final class StatusHtml {
                 .append(fitSection.render(s.lastFit()))
                 .append("</section>\n</main>\n</body>\n</html>\n");
         return html.toString();
+    }
+
+    /** The lots' cards; a lot's chart id is the same whether it is open or closed (it is never both). */
+    private void lotSection(StringBuilder html, String id, String title, String none, List<LotView> lots, ChartIds ids) {
+        html.append("<section id=\"").append(id).append("\">\n<h2>").append(title).append(" (").append(lots.size())
+                .append(")</h2>\n");
+        if (lots.isEmpty()) {
+            html.append("<p class=\"empty\">").append(none).append("</p>\n</section>\n");
+            return;
+        }
+        html.append("<div class=\"cards\">\n");
+        for (LotView lot : lots) {
+            html.append("<figure class=\"card lot-card").append(lot.closed() ? " closed-lot" : "")
+                    .append(lot.highlighted() ? " alerted" : "").append("\">\n<figcaption>")
+                    .append(lotCaption(lot)).append("</figcaption>\n")
+                    .append(lotChart.render(lot, ids.lot(lot.product(), lot.lot()))).append("\n</figure>\n");
+        }
+        html.append("</div>\n</section>\n");
     }
 
     private static void summary(StringBuilder html, FleetSnapshot s) {
@@ -121,8 +130,15 @@ final class StatusHtml {
         if (lot.excluded() > 0) {
             c.append(" \u00b7 ").append(lot.excluded()).append(" excluded");
         }
+        if (lot.closed()) {
+            c.append(" \u00b7 <span class=\"closed-mark\">closed ")
+                    .append(Html.escape(AlertTable.time(lot.closedAt().toEpochMilli()))).append(" UTC</span>");
+        }
         if (lot.alerted()) {
             c.append(" \u00b7 <span class=\"flag\">").append(Html.escape(alertWords(lot.openAlert()))).append("</span>");
+        } else if (lot.closed() && lot.hadAlert()) {
+            c.append(" \u00b7 <span class=\"flag\">alerted while open, ").append(Html.escape(alertWords(lot.lastAlert())))
+                    .append("</span>");
         }
         return c.toString();
     }

@@ -3,7 +3,11 @@ package org.qfleet.app.status;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
 
+import java.time.Clock;
+import java.time.Instant;
+import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -22,6 +26,7 @@ import org.qfleet.drift.LotState;
 import org.qfleet.drift.LotStatistics;
 import org.qfleet.drift.Measurement;
 import org.qfleet.drift.PlantValues;
+import org.qfleet.drift.UnitValue;
 import org.qfleet.drift.Rule;
 import org.qfleet.drift.Severity;
 import org.qfleet.drift.StationState;
@@ -29,27 +34,96 @@ import org.qfleet.drift.StationState;
 class FleetViewTest {
 
     private static final Baseline BASELINE = PlantValues.baseline();
-    private static final FleetView.Limits SMALL = new FleetView.Limits(5, 4, 20, 6, 3, 3);
+    private static final Instant CLOSING = Instant.parse("2026-03-02T09:30:00Z");
+    static final FleetView.Limits SMALL = new FleetView.Limits(5, 4, 20, 6, 3, 3, 6);
 
     private final FleetView view = new FleetView(SMALL);
 
     @Test
-    void manyLotsOpeningAndClosingLeaveNothingBehind() {
+    void manyLotsOpeningAndClosingKeepTheBoundOfClosedLotsPreferringTheOnesThatHadAnAlert() {
         for (int lot = 0; lot < 2000; lot++) {
-            feedLot(view, "L" + lot, 30);
-            view.lotClosed(PlantValues.PRODUCT, "L" + lot);
+            String id = "L" + lot;
+            if (lot == 150 || lot == 700 || lot == 1300) {
+                feedAlertedLot(view, id);
+            } else {
+                feedLot(view, id, 30);
+            }
+            view.lotClosed(PlantValues.PRODUCT, id);
+            assertThat(view.snapshot().closedLots()).hasSizeLessThanOrEqualTo(SMALL.closedLots());
         }
-        assertThat(view.snapshot().lots()).isEmpty();
+        FleetSnapshot s = view.snapshot();
+        assertThat(s.lots()).isEmpty();
+        assertThat(s.closedLots()).as("the three alerted lots, then the latest closed others, each newest first")
+                .extracting(LotView::lot).containsExactly("L1300", "L700", "L150", "L1999", "L1998", "L1997");
+        assertThat(s.closedLots()).allSatisfy(l -> assertThat(l.closed()).isTrue());
+        assertThat(s.closedLots().subList(0, 3)).allSatisfy(l -> assertThat(l.hadAlert()).isTrue());
+        assertThat(s.closedLots().subList(3, 6)).allSatisfy(l -> assertThat(l.hadAlert()).isFalse());
+        assertThat(s.closedLots().get(3).points()).hasSizeLessThanOrEqualTo(SMALL.pointsPerChart())
+                .extracting(LotPoint::units).endsWith(30L);
     }
 
     @Test
-    void lotsLeaveTheViewWhenTheLotMonitorClosesThem() {
-        PlantFeed feed = new PlantFeed(PlantValues.settings(), view);
+    void whenMoreLotsThatHadAnAlertCloseThanTheBoundTheOldestOfThemGiveWay() {
+        for (int lot = 0; lot < 9; lot++) {
+            feedAlertedLot(view, "A" + lot);
+            view.lotClosed(PlantValues.PRODUCT, "A" + lot);
+        }
+        feedLot(view, "L1", 5);
+        view.lotClosed(PlantValues.PRODUCT, "L1");
+        assertThat(view.snapshot().closedLots()).extracting(LotView::lot)
+                .containsExactly("A8", "A7", "A6", "A5", "A4", "A3");
+    }
+
+    @Test
+    void lotsMoveToTheRecentlyClosedListWhenTheLotMonitorClosesThem() {
+        FleetView timed = new FleetView(SMALL, Clock.fixed(CLOSING, ZoneOffset.UTC));
+        PlantFeed feed = new PlantFeed(PlantValues.settings(), timed);
         PlantValues plant = new PlantValues(5, 4);
         feed.measurements(plant.lot("L1", 100, 1.0));
         feed.measurements(plant.lot("L2", 100, 1.0));
-        assertThat(view.snapshot().lots()).as("L1 closed after the quiet period of 30 minutes")
-                .extracting(LotView::lot).containsExactly("L2");
+        FleetSnapshot s = timed.snapshot();
+        assertThat(s.lots()).as("L1 closed after the quiet period of 30 minutes").extracting(LotView::lot)
+                .containsExactly("L2");
+        assertThat(s.closedLots()).extracting(LotView::lot).containsExactly("L1");
+        LotView closed = s.closedLots().get(0);
+        assertThat(closed.closedAt()).isEqualTo(CLOSING);
+        assertThat(closed.latest().units()).as("its chart, kept whole").isEqualTo(100);
+        assertThat(closed.highlighted()).isFalse();
+    }
+
+    @Test
+    void anAlertPublishedForALotMarksItAndAClosedLotShowsItsAlertOnlyWhileRaised() {
+        feedLot(view, "L1", 10);
+        feedLot(view, "L2", 10);
+        view.alertPublished(lotAlert("L1", AlertStatus.RAISED, 1));
+        view.alertPublished(lotAlert("L2", AlertStatus.RAISED, 1));
+        view.alertPublished(lotAlert("L1", AlertStatus.CLEARED, 2));
+        view.lotClosed(PlantValues.PRODUCT, "L1");
+        view.lotClosed(PlantValues.PRODUCT, "L2");
+        List<LotView> closed = view.snapshot().closedLots();
+        assertThat(closed).extracting(LotView::lot).containsExactly("L2", "L1");
+        assertThat(closed).allSatisfy(l -> assertThat(l.hadAlert()).isTrue())
+                .allSatisfy(l -> assertThat(l.highlighted()).isTrue());
+        assertThat(closed.get(0).alerted()).as("L2's alert is still raised").isTrue();
+        assertThat(closed.get(1).alerted()).as("L1's alert cleared").isFalse();
+        assertThat(closed.get(1).lastAlert().subject()).isEqualTo("L1");
+    }
+
+    @Test
+    void aClosedLotThatGetsAUnitAgainIsOpenAgainAndNewest() {
+        feedLot(view, "L1", 10);
+        feedLot(view, "L2", 10);
+        view.lotClosed(PlantValues.PRODUCT, "L1");
+        view.lotClosed(PlantValues.PRODUCT, "unknown-lot");
+        assertThat(view.snapshot().closedLots()).extracting(LotView::lot).containsExactly("L1");
+        feedLot(view, "L1", 3);
+        FleetSnapshot s = view.snapshot();
+        assertThat(s.closedLots()).isEmpty();
+        assertThat(s.lots()).extracting(LotView::lot).containsExactly("L1", "L2");
+        assertThat(s.lots().get(0).closed()).isFalse();
+        assertThat(s.lots().get(0).latest().units()).isEqualTo(3);
+        view.lotClosed(PlantValues.PRODUCT, "L1");
+        assertThat(view.snapshot().closedLots()).extracting(LotView::lot).containsExactly("L1");
     }
 
     @Test
@@ -72,7 +146,8 @@ class FleetViewTest {
         assertThat(points.get(points.size() - 1).units()).isEqualTo(1000);
         assertThat(points).extracting(LotPoint::units).isSorted().doesNotHaveDuplicates();
         LotPoint last = points.get(points.size() - 1);
-        // a configured baseline: mu0 - 3.5 sigma0 / sqrt(n)
+        // Shewhart X-bar limit mu0 - L sigma0 / sqrt(n) (Montgomery, recalled from memory) with the plant's width
+        // L = 3.5; a configured baseline adds no uncertainty of its own mean
         assertThat(last.xbarLimit()).isCloseTo(BASELINE.quMean() - 3.5 * BASELINE.quSigma() / Math.sqrt(1000), within(1e-9));
     }
 
@@ -80,9 +155,10 @@ class FleetViewTest {
     void aRetestOrARepeatedStateReplacesTheNewestPointInsteadOfAddingOne() {
         LotState state = LotState.open(PlantValues.PRODUCT, "L1");
         LotStatistics stats = LotStatistics.EMPTY;
-        stats = stats.plus(unit("L1", "u1", 6000)).plus(unit("L1", "u2", 6100));
+        stats = stats.plus(UnitValue.of(unit("L1", "u1", 6000)), null).plus(UnitValue.of(unit("L1", "u2", 6100)), null);
         view.lotUpdated(withStats(state, stats), BASELINE);
-        view.lotUpdated(withStats(state, stats.plus(unit("L1", "u2", 5900))), BASELINE);
+        view.lotUpdated(withStats(state, stats.plus(UnitValue.of(unit("L1", "u2", 5900)), UnitValue.of(unit("L1", "u2", 6100)))),
+                BASELINE);
         List<LotPoint> points = view.snapshot().lots().get(0).points();
         assertThat(points).hasSize(1);
         assertThat(points.get(0).mean()).isEqualTo(5950);
@@ -90,7 +166,7 @@ class FleetViewTest {
 
     @Test
     void aLotWhoseBaselineIsStillLearnedHasNoLimits() {
-        LotState state = withStats(LotState.open("p", "L1"), LotStatistics.EMPTY.plus(unit("L1", "u1", 6000)));
+        LotState state = withStats(LotState.open("p", "L1"), LotStatistics.EMPTY.plus(UnitValue.of(unit("L1", "u1", 6000)), null));
         view.lotUpdated(state, null);
         LotView lot = view.snapshot().lots().get(0);
         assertThat(lot.mu0()).isNaN();
@@ -155,7 +231,8 @@ class FleetViewTest {
 
     @Test
     void boundsBelowOneAreRefusedWithTheValuesGiven() {
-        assertThatThrownBy(() -> new FleetView.Limits(0, 1, 10, 1, 1, 1)).hasMessageContaining("got lots 0, stations 1");
+        assertThatThrownBy(() -> new FleetView.Limits(0, 1, 10, 1, 1, 1, 1)).hasMessageContaining("got lots 0, stations 1");
+        assertThatThrownBy(() -> new FleetView.Limits(1, 1, 10, 1, 1, 1, 0)).hasMessageContaining("closed lots 0");
     }
 
     @Test
@@ -180,6 +257,7 @@ class FleetViewTest {
             for (int i = 0; i < 300; i++) {
                 FleetSnapshot s = shared.snapshot();
                 assertThat(s.lots()).hasSizeLessThanOrEqualTo(SMALL.lots());
+                assertThat(s.closedLots()).hasSizeLessThanOrEqualTo(SMALL.closedLots());
                 assertThat(s.stations()).hasSizeLessThanOrEqualTo(SMALL.stations());
                 assertThat(s.recentAlerts()).hasSizeLessThanOrEqualTo(SMALL.recentAlerts());
                 assertThat(s.raisedAlerts()).hasSizeLessThanOrEqualTo(SMALL.raisedAlerts());
@@ -194,8 +272,10 @@ class FleetViewTest {
         assertThat(failures).isEmpty();
         List<LotView> open = shared.snapshot().lots();
         assertThat(open).hasSize(SMALL.lots());
-        assertThat(open).as("closed lots (the even ones) are gone")
+        assertThat(open).as("closed lots (the even ones) are not open")
                 .allSatisfy(l -> assertThat(Integer.parseInt(l.lot().substring(l.lot().indexOf('L') + 1)) % 2).isEqualTo(1));
+        assertThat(shared.snapshot().closedLots()).hasSize(SMALL.closedLots())
+                .allSatisfy(l -> assertThat(Integer.parseInt(l.lot().substring(l.lot().indexOf('L') + 1)) % 2).isZero());
     }
 
     @Test
@@ -214,14 +294,19 @@ class FleetViewTest {
     }
 
     /** Feeds {@code units} values of one lot, one lot update per unit. */
-    private static FleetSnapshot feedLot(FleetView view, String lot, int units) {
+    static FleetSnapshot feedLot(FleetView view, String lot, int units) {
         LotStatistics stats = LotStatistics.EMPTY;
         LotState state = LotState.open(PlantValues.PRODUCT, lot);
         for (int i = 0; i < units; i++) {
-            stats = stats.plus(unit(lot, lot + "-" + i, 6000 + (i % 7) * 10));
+            stats = stats.plus(UnitValue.of(unit(lot, lot + "-" + i, 6000 + (i % 7) * 10)), null);
             view.lotUpdated(withStats(state, stats), BASELINE);
         }
         return view.snapshot();
+    }
+
+    /** Feeds a lot whose state carries a raised lot alert, as the lot monitor reports it. */
+    static void feedAlertedLot(FleetView view, String lot) {
+        view.lotUpdated(withTracker(LotState.open(PlantValues.PRODUCT, lot), lotAlert(lot, AlertStatus.RAISED, 1)), BASELINE);
     }
 
     private static Measurement unit(String lot, String unit, double qu) {
@@ -233,7 +318,7 @@ class FleetViewTest {
     }
 
     private static LotState withTracker(LotState s, Alert open) {
-        return new LotState(s.product(), s.lot(), LotStatistics.EMPTY.plus(unit(s.lot(), "u", 5000)), 0, 0, 0,
+        return new LotState(s.product(), s.lot(), LotStatistics.EMPTY.plus(UnitValue.of(unit(s.lot(), "u", 5000)), null), 0, 0, 0,
                 new AlertTracker(AlertKind.LOT, s.product(), s.lot(), 1, open));
     }
 

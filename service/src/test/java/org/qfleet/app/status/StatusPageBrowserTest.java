@@ -30,7 +30,8 @@ import org.qfleet.sim.StationFault;
 /**
  * The status page in a real browser: the demo plant's sweeps (a tired plating bath makes a cavity
  * lot lose 4 % of its Qu, and station st-03's connector works loose) are fitted and run through
- * both drift monitors in memory, the view they feed is served on a local port, and headless
+ * both drift monitors in memory until both alerts were raised and the tired lot has closed (as it
+ * soon does in the demo), the view they feed is served on a local port, and headless
  * Chromium takes a screenshot ({@code target/status-page.png}) and dumps the DOM it built
  * ({@code target/status-page-dom.html}).
  * Skipped when no Chromium is installed.
@@ -49,7 +50,7 @@ class StatusPageBrowserTest {
     Path work;
 
     @Test
-    void chromiumShowsTheDriftingLotTheFaultyStationAndTheLastFit() throws Exception {
+    void chromiumShowsTheDriftingLotAfterItClosedTheFaultyStationAndTheLastFit() throws Exception {
         Optional<Path> chromium = HeadlessChromium.find();
         assumeTrue(chromium.isPresent(), "no chromium binary on the PATH (or in QFLEET_CHROMIUM)");
 
@@ -59,7 +60,7 @@ class StatusPageBrowserTest {
         DemoPlant plant = new DemoPlant(1, Clock.fixed(start, ZoneOffset.UTC));
         Instant faultTime = start.plusSeconds(FAULT_AFTER_SWEEPS);
         String tiredLot = null;
-        for (int i = 0; i < MAX_SWEEPS && !bothRaised(feed, tiredLot, faultTime); i++) {
+        for (int i = 0; i < MAX_SWEEPS && !(bothRaised(feed, tiredLot, faultTime) && closed(view, tiredLot)); i++) {
             if (i == FAULT_AFTER_SWEEPS) {
                 plant.loosenConnector(LOOSE_STATION, StationFault.LOOSE_CONNECTOR);
             }
@@ -69,6 +70,7 @@ class StatusPageBrowserTest {
             }
         }
         assertThat(bothRaised(feed, tiredLot, faultTime)).as("the monitors raised both alerts of the demo").isTrue();
+        assertThat(closed(view, tiredLot)).as("the tired lot closed").isTrue();
         FleetSnapshot snapshot = view.snapshot();
 
         HttpServer server = HttpServer.create(new InetSocketAddress(InetAddress.getLoopbackAddress(), 0), 0);
@@ -83,11 +85,19 @@ class StatusPageBrowserTest {
             String dom = browser.dumpDom(url);
             Files.writeString(DOM, dom);
 
-            assertThat(count(dom, "<svg[^>]* class=\"lot-chart")).isEqualTo(snapshot.lots().size()).isPositive();
+            assertThat(count(dom, "<svg[^>]* class=\"lot-chart")).isEqualTo(snapshot.lots().size() + snapshot.closedLots().size())
+                    .isGreaterThan(snapshot.closedLots().size());
+            assertThat(count(dom, "<svg[^>]* class=\"lot-chart closed-lot")).isEqualTo(snapshot.closedLots().size());
             assertThat(count(dom, "<svg[^>]* class=\"station-chart")).isEqualTo(snapshot.stations().size()).isEqualTo(8);
-            assertThat(dom).as("the tired lot and the loose station, both alerted now").contains(
-                    "id=\"lot-chart-" + TIRED_PRODUCT + "-" + tiredLot + "\" class=\"lot-chart alerted\"",
+            assertThat(dom).as("the tired lot, closed after its alert, and the loose station, alerted now").contains(
+                    "id=\"lot-chart-" + TIRED_PRODUCT + "-" + tiredLot + "\" class=\"lot-chart closed-lot alerted\"",
                     "id=\"station-chart-" + TIRED_PRODUCT + "-" + LOOSE_STATION + "\" class=\"station-chart alerted\"");
+            String closedSection = between(dom, "<section id=\"closed-lots\"", "</section>");
+            Matcher firstClosed = Pattern.compile("<svg[^>]*>").matcher(closedSection);
+            assertThat(firstClosed.find()).isTrue();
+            assertThat(firstClosed.group()).as("the tired lot's chart comes first among the closed lots")
+                    .contains("id=\"lot-chart-" + TIRED_PRODUCT + "-" + tiredLot + "\"");
+            assertThat(closedSection).contains("closed ", "alerted while open", "lot-mean-below-xbar-limit");
             String table = between(dom, "<table id=\"alert-table\"", "</table>");
             assertThat(table).contains(tiredLot, LOOSE_STATION, "lot-mean-below-xbar-limit");
             assertThat(dom).containsPattern("<svg[^>]* id=\"fit-plot\"");
@@ -119,6 +129,10 @@ class StatusPageBrowserTest {
             }
         }
         return lotRaised && stationRaised;
+    }
+
+    private static boolean closed(FleetView view, String lot) {
+        return lot != null && view.snapshot().closedLots().stream().anyMatch(l -> l.lot().equals(lot));
     }
 
     private static int count(String text, String regex) {

@@ -13,6 +13,7 @@ import java.time.Clock;
 import java.time.Duration;
 import java.time.Instant;
 import java.time.ZoneOffset;
+import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
@@ -23,6 +24,7 @@ import org.qfleet.drift.LotState;
 import org.qfleet.drift.LotStatistics;
 import org.qfleet.drift.Measurement;
 import org.qfleet.drift.PlantValues;
+import org.qfleet.drift.UnitValue;
 import org.qfleet.fit.ResonanceAnalyzer;
 import org.qfleet.fit.ResonanceResult;
 import org.qfleet.sim.DemoPlant;
@@ -46,7 +48,7 @@ class StatusPageTest {
     }
 
     @Test
-    void thePageIsWellFormedWithOneChartPerLotAndStationDrawingEveryKeptPoint() throws Exception {
+    void thePageIsWellFormedWithOneChartPerOpenOrClosedLotAndStationDrawingEveryKeptPoint() throws Exception {
         FleetView view = plantView();
         FleetSnapshot snapshot = view.snapshot();
         HttpResponse<String> response = get(serve(view, "/"), "GET");
@@ -63,12 +65,17 @@ class StatusPageTest {
         assertThat(page.elements("script", null)).isEmpty();
         assertThat(response.body()).doesNotContain("src=", "href=\"http");
 
+        List<LotView> lots = new ArrayList<>(snapshot.lots());
+        lots.addAll(snapshot.closedLots());
+        assertThat(snapshot.closedLots()).as("L1 and L3 closed by the units of the lots after them").hasSize(2);
         List<Element> lotCharts = page.elements("svg", "lot-chart");
-        assertThat(lotCharts).hasSize(snapshot.lots().size()).hasSize(3);
-        for (LotView lot : snapshot.lots()) {
+        assertThat(lotCharts).hasSize(lots.size()).hasSize(3);
+        for (LotView lot : lots) {
             Element chart = page.byId("lot-chart-" + lot.product() + "-" + lot.lot());
             assertThat(chart).as("chart of lot %s", lot.lot()).isNotNull();
             assertThat(chart.getNamespaceURI()).isEqualTo("http://www.w3.org/2000/svg");
+            assertThat(chart.getAttribute("class").split(" ")).as("closed-lot class").containsOnlyOnce("lot-chart")
+                    .matches(classes -> List.of(classes).contains("closed-lot") == lot.closed());
             List<Element> mean = PageDocument.elementsIn(chart, "polyline", "lot-mean");
             assertThat(mean).hasSize(1);
             assertThat(PageDocument.vertices(mean.get(0))).isEqualTo(lot.points().size());
@@ -122,15 +129,72 @@ class StatusPageTest {
     }
 
     @Test
+    void aClosedLotThatDriftedStaysOnThePageAfterTheOpenLotsHighlightedAndMarkedClosed() throws Exception {
+        Instant closing = Instant.parse("2026-03-02T09:30:00Z");
+        FleetView view = new FleetView(FleetView.Limits.DEFAULT, Clock.fixed(closing, ZoneOffset.UTC));
+        PlantFeed feed = new PlantFeed(PlantValues.settings(), view);
+        PlantValues plant = new PlantValues(21, 4);
+        feed.measurements(plant.lot("L1", 150, 1.0));
+        feed.measurements(plant.lot(LOW_LOT, 120, 0.96));
+        feed.measurements(plant.lot("L3", 100, 1.0));
+        assertThat(feed.alerts()).as("the low lot was alerted, and its alert cleared when it closed")
+                .anySatisfy(a -> assertThat(a.subject()).isEqualTo(LOW_LOT))
+                .noneSatisfy(a -> assertThat(view.snapshot().raisedAlerts()).contains(a));
+        FleetSnapshot snapshot = view.snapshot();
+        assertThat(snapshot.lots()).extracting(LotView::lot).containsExactly("L3");
+        assertThat(snapshot.closedLots()).extracting(LotView::lot).containsExactly(LOW_LOT, "L1");
+
+        PageDocument page = PageDocument.parse(get(serve(view, "/"), "GET").body());
+        Element closedSection = page.byId("closed-lots");
+        assertThat(closedSection.getTextContent()).contains("Recently closed lots (2)");
+        List<Element> closedCharts = PageDocument.elementsIn(closedSection, "svg", "lot-chart");
+        assertThat(closedCharts).extracting(c -> c.getAttribute("data-lot")).containsExactly(LOW_LOT, "L1");
+        assertThat(closedCharts).allSatisfy(c -> assertThat(c.getAttribute("class").split(" ")).contains("closed-lot"));
+        Element low = page.byId("lot-chart-" + PlantValues.PRODUCT + "-" + LOW_LOT);
+        assertThat(low).isSameAs(closedCharts.get(0));
+        assertThat(low.getAttribute("class").split(" ")).contains("alerted");
+        assertThat(closedCharts.get(1).getAttribute("class").split(" ")).doesNotContain("alerted");
+        assertThat(PageDocument.vertices(PageDocument.elementsIn(low, "polyline", "lot-mean").get(0)))
+                .isEqualTo(snapshot.closedLots().get(0).points().size()).isPositive();
+        List<Element> closedCards = PageDocument.elementsIn(closedSection, "figure", "closed-lot");
+        assertThat(closedCards).hasSize(2);
+        assertThat(closedCards.get(0).getAttribute("class").split(" ")).contains("alerted");
+        assertThat(closedCards.get(0).getTextContent()).contains("closed 2026-03-02 09:30:00 UTC",
+                "alerted while open", "lot-mean-below-xbar-limit");
+
+        Element openChart = PageDocument.elementsIn(page.byId("lots"), "svg", "lot-chart").get(0);
+        assertThat(openChart.getAttribute("class")).isEqualTo("lot-chart");
+        assertThat(page.elements("svg", "lot-chart")).extracting(c -> c.getAttribute("id")).doesNotHaveDuplicates()
+                .hasSize(3);
+        assertThat(page.byId("attention").getTextContent()).as("no alert is raised now").doesNotContain(LOW_LOT);
+    }
+
+    @Test
+    void needsAttentionNamesAClosedLotWhoseAlertIsStillRaisedAndLinksToItsChart() throws Exception {
+        FleetView view = new FleetView();
+        FleetViewTest.feedLot(view, "L1", 12);
+        view.alertPublished(FleetViewTest.lotAlert("L1", AlertStatus.RAISED, 1));
+        view.lotClosed(PlantValues.PRODUCT, "L1");
+        PageDocument page = PageDocument.parse(get(serve(view, "/"), "GET").body());
+        String id = "lot-chart-" + PlantValues.PRODUCT + "-L1";
+        assertThat(page.byId(id).getAttribute("class")).isEqualTo("lot-chart closed-lot alerted");
+        List<Element> links = PageDocument.elementsIn(page.byId("attention"), "a", null);
+        assertThat(links).extracting(a -> a.getAttribute("href")).containsExactly("#" + id);
+    }
+
+    @Test
     void namesFromTheNetworkAreEscaped() throws Exception {
         String hostile = "<script>alert('x')</script>";
         String station = "st\"><img src=x onerror=y>";
         FleetView view = new FleetView();
         Baseline b = PlantValues.baseline();
-        LotStatistics stats = LotStatistics.EMPTY.plus(new Measurement("p&q", hostile, station, "u1", 0, 6000,
-                PlantValues.F0, PlantValues.LEVEL, List.of()));
+        LotStatistics stats = LotStatistics.EMPTY.plus(UnitValue.of(new Measurement("p&q", hostile, station, "u1", 0, 6000,
+                PlantValues.F0, PlantValues.LEVEL, List.of())), null);
         view.lotUpdated(new LotState("p&q", hostile, stats, 0, 0, 0, LotState.open("p&q", hostile).alerts()), b);
         view.alertPublished(FleetViewTest.lotAlert(hostile, AlertStatus.RAISED, 1));
+        String hostileClosed = "</title><script>x()</script>&amp;";
+        FleetViewTest.feedAlertedLot(view, hostileClosed);
+        view.lotClosed(PlantValues.PRODUCT, hostileClosed);
         String body = get(serve(view, "/"), "GET").body();
 
         assertThat(body).doesNotContain("<script", "<img");
@@ -141,7 +205,10 @@ class StatusPageTest {
         assertThat(chart.getAttribute("data-lot")).isEqualTo(hostile);
         assertThat(chart.getAttribute("data-product")).isEqualTo("p&q");
         assertThat(chart.getAttribute("id")).matches("[A-Za-z0-9._-]+");
-        assertThat(page.text()).contains(hostile);
+        assertThat(page.text()).contains(hostile, hostileClosed);
+        Element closed = PageDocument.elementsIn(page.byId("closed-lots"), "svg", "closed-lot").get(0);
+        assertThat(closed.getAttribute("data-lot")).isEqualTo(hostileClosed);
+        assertThat(closed.getAttribute("id")).matches("[A-Za-z0-9._-]+").isNotEqualTo(chart.getAttribute("id"));
         assertThat(page.elements("tr", "alert-row").get(0).getTextContent()).contains(hostile);
         assertThat(AlertKind.LOT.code()).isEqualTo("lot");
     }
@@ -150,7 +217,7 @@ class StatusPageTest {
     void anEmptyViewGivesAPageThatSaysSo() throws Exception {
         PageDocument page = PageDocument.parse(get(serve(new FleetView(), "/"), "GET").body());
         assertThat(page.elements("svg", null)).isEmpty();
-        assertThat(page.text()).contains("No open lot", "No station", "No alert since", "No sweep fitted yet");
+        assertThat(page.text()).contains("No open lot", "No lot closed recently", "No station", "No alert since", "No sweep fitted yet");
     }
 
     @Test
@@ -172,11 +239,12 @@ class StatusPageTest {
     /**
      * Three lots of the drift tests' plant through both monitors (a normal one, one measured after
      * st-03's connector worked loose, then one 4 % low while the connector is still loose; a quiet
-     * period long enough to keep all three open), and one fitted sweep of the demo plant.
+     * period long enough that only the units of the lot after it close a lot, so the low lot stays
+     * open and the other two are recently closed), and one fitted sweep of the demo plant.
      */
     static FleetView plantView() throws Exception {
         FleetView view = new FleetView();
-        PlantFeed feed = new PlantFeed(PlantValues.settings().withQuietPeriod(Duration.ofDays(1)).withCloseAfterUnits(0), view);
+        PlantFeed feed = new PlantFeed(PlantValues.settings().withQuietPeriod(Duration.ofDays(1)), view);
         PlantValues plant = new PlantValues(21, 4);
         feed.measurements(plant.lot("L1", 150, 1.0));
         feed.measurements(plant.lot("L3", 100, 1.0, LOOSE_STATION, PlantValues.Fault.LOOSE_CONNECTOR));
