@@ -232,12 +232,15 @@ final class BenchRun {
             lastSend.set(now);
             return message;
         });
-        say(String.format(Locale.ROOT, "offering %.0f sweeps/s for %.0f s to the running service", plan.rate(),
-                plan.rateDuration().toNanos() / 1e9));
-        progress.begin(BenchFigures.LATENCY, offered, () -> watcher.accounted(from, from + offered), meter);
         long sent;
         try (publisher) {
+            publisher.connect();
+            say(String.format(Locale.ROOT, "offering %.0f sweeps/s for %.0f s to the running service", plan.rate(),
+                    plan.rateDuration().toNanos() / 1e9));
+            progress.begin(BenchFigures.LATENCY, offered, () -> watcher.accounted(from, from + offered), meter);
             sent = publisher.publish(offered, plan.rate(), stop);
+        } catch (org.apache.kafka.common.KafkaException e) {
+            throw new BenchException("cannot publish to " + topics.sweeps() + ": " + BenchException.reason(e), e);
         }
         if (publisher.failure() != null) {
             progress.end();

@@ -108,6 +108,11 @@ final class SweepPublisher implements AutoCloseable {
         return n;
     }
 
+    /** Fetches the topic's metadata now, so that the first send does not wait for it. */
+    void connect() {
+        producer.partitionsFor(topic);
+    }
+
     /** Sweeps handed to the producer so far. */
     long sent() {
         return sent.get();
