@@ -41,10 +41,11 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = {
-            "Measure throughput and latency: publish simulated sweeps into fresh topics, read and decode",
-            "them with a plain consumer (raw ceiling), let the full service with exactly-once work",
-            "through them (saturation), then offer sweeps at a fixed rate and record end-to-end latency.",
-            "Without --bootstrap-servers, a Kafka broker is started in this process (temporary data).",
+            "Measure throughput and latency: publish simulated sweeps into fresh topics,",
+            "read and decode them with a plain consumer (the raw ceiling), let the full",
+            "service with exactly-once work through them (saturation), then offer sweeps",
+            "at a fixed rate and record end-to-end latency; CPU and heap for each phase.",
+            "Without --bootstrap-servers, a Kafka broker is started in this process.",
             "Prints a table on stdout and writes the figures as JSON to --output."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {

@@ -48,8 +48,11 @@ record BenchFigures(String startedAt, Machine machine, Settings settings, List<P
      * @param jvm        JVM name and version
      * @param os         operating system name, version and architecture
      * @param maxHeapBytes the JVM's heap bound
+     * @param loadAverage  the system's load average over the last minute when the run ended (all
+     *                     processes, this one included; NaN where unknown): well above the
+     *                     number of cores means other work shared the machine
      */
-    record Machine(int cores, String cpuModel, String jvm, String os, long maxHeapBytes) {
+    record Machine(int cores, String cpuModel, String jvm, String os, long maxHeapBytes, double loadAverage) {
     }
 
     /**

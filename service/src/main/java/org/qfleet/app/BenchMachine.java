@@ -1,6 +1,7 @@
 package org.qfleet.app;
 
 import java.io.IOException;
+import java.lang.management.ManagementFactory;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -17,7 +18,7 @@ final class BenchMachine {
         return new BenchFigures.Machine(Runtime.getRuntime().availableProcessors(), cpuModel(),
                 System.getProperty("java.vm.name") + " " + System.getProperty("java.runtime.version"),
                 System.getProperty("os.name") + " " + System.getProperty("os.version") + " " + System.getProperty("os.arch"),
-                Runtime.getRuntime().maxMemory());
+                Runtime.getRuntime().maxMemory(), ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
     }
 
     /** The {@code model name} line of {@code /proc/cpuinfo} (Linux), or "unknown". */

@@ -41,8 +41,8 @@ final class BenchReport {
         lines.add(String.format(Locale.ROOT, "settings: broker %s, %d points, %d partitions, %d stream threads, %d distinct sweeps of %.0f bytes",
                 s.broker(), s.points(), s.partitions(), s.threads(), s.distinctSweeps(), s.meanMessageBytes()));
         BenchFigures.Machine m = f.machine();
-        lines.add(String.format(Locale.ROOT, "machine: %d cores (%s), %s, %s, heap bound %.0f MB",
-                m.cores(), m.cpuModel(), m.jvm(), m.os(), m.maxHeapBytes() / MB));
+        lines.add(String.format(Locale.ROOT, "machine: %d cores (%s), %s, %s, heap bound %.0f MB, load average %s at the end",
+                m.cores(), m.cpuModel(), m.jvm(), m.os(), m.maxHeapBytes() / MB, m.loadAverage() >= 0 ? number(m.loadAverage()) : "unknown"));
         return lines;
     }
 
@@ -73,6 +73,7 @@ final class BenchReport {
         machine.put("jvm", m.jvm());
         machine.put("os", m.os());
         machine.put("maxHeapBytes", m.maxHeapBytes());
+        putFinite(machine, "loadAverage", m.loadAverage() >= 0 ? round(m.loadAverage(), 2) : Double.NaN);
         BenchFigures.Settings s = f.settings();
         ObjectNode settings = root.putObject("settings");
         settings.put("broker", s.broker());

@@ -102,10 +102,9 @@ final class BenchRun {
             StreamService running = null;
             try {
                 long start = System.nanoTime();
-                PhaseMeter meter = PhaseMeter.start();
                 say("starting the service (application id " + applicationId() + ", " + plan.threads() + " stream threads)");
                 running = StreamService.start(service, ProductCatalogue.demoPlant());
-                phases.add(saturation(watcher, running, start, meter));
+                phases.add(saturation(watcher, running, start));
                 if (!plan.skipLatency() && !stop.getAsBoolean() && !running.hasFailed()) {
                     phases.add(latency(sweeps, topics, watcher, running, offered));
                 }
@@ -121,6 +120,7 @@ final class BenchRun {
                 throw new BenchException("the service stopped after an error; see the log above");
             }
         }
+        checkStop();
         return new BenchFigures(startedAt, BenchMachine.describe(),
                 new BenchFigures.Settings(plan.broker(), plan.sweeps(), plan.points(), sweeps.distinct(), sweeps.meanMessageBytes(),
                         plan.forms().stream().map(TraceForm::code).toList(), plan.partitions(), plan.threads(), plan.rate(),
@@ -199,9 +199,13 @@ final class BenchRun {
         return phase;
     }
 
-    private BenchFigures.Phase saturation(BenchResultWatcher watcher, StreamService running, long start, PhaseMeter meter)
+    private BenchFigures.Phase saturation(BenchResultWatcher watcher, StreamService running, long start)
             throws InterruptedException {
         long n = plan.sweeps();
+        // CPU and heap from the first result on: the service's start-up (joining the group, setting
+        // up transactions) is reported as startSeconds, not averaged into the steady work.
+        awaitFirst(watcher, running);
+        PhaseMeter meter = PhaseMeter.start();
         progress.begin(BenchFigures.SERVICE, n, () -> watcher.accounted(0, n), meter);
         awaitAccounted(watcher, running, 0, n);
         progress.end();
@@ -259,6 +263,15 @@ final class BenchRun {
                         s.duplicates() - before.duplicates()), latency);
         sayDone(phase);
         return phase;
+    }
+
+    /** Waits until the first result or reject is visible, the stall timeout has passed, or the service failed. */
+    private void awaitFirst(BenchResultWatcher watcher, StreamService running) throws InterruptedException {
+        long deadline = System.nanoTime() + plan.stallTimeout().toNanos();
+        while (watcher.snapshot().firstNanos() < 0 && !stop.getAsBoolean() && !running.hasFailed()
+                && System.nanoTime() < deadline) {
+            Thread.sleep(20);
+        }
     }
 
     /** Waits until the sweeps [from, to) have all come out, nothing has come for the stall timeout, or the service failed. */
