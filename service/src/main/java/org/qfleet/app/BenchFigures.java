@@ -93,6 +93,14 @@ record BenchFigures(String startedAt, Machine machine, Settings settings, List<P
      */
     record Phase(String name, long sweeps, double seconds, double sweepsPerSecond, PhaseMeter.Resources resources,
             Long decodeFailures, Double startSeconds, Accounting accounting, Latency latency) {
+
+        /**
+         * CPU time of the process per sweep, in milliseconds: cores busy over sweeps per second.
+         * Less sensitive than the rate to other work on a shared machine.
+         */
+        double cpuMillisPerSweep() {
+            return sweepsPerSecond > 0 ? 1000 * resources.coresBusy() / sweepsPerSecond : Double.NaN;
+        }
     }
 
     /**

@@ -19,13 +19,13 @@ final class BenchReport {
     /** The table, the service/raw ratio and the machine, one line each. */
     static List<String> table(BenchFigures f) {
         List<String> lines = new ArrayList<>();
-        lines.add(String.format(Locale.ROOT, "%-8s %8s %8s %10s %8s %8s %6s %17s",
-                "phase", "sweeps", "seconds", "sweeps/s", "p50 ms", "p99 ms", "CPU %", "heap MB gc/max"));
+        lines.add(String.format(Locale.ROOT, "%-8s %8s %8s %10s %8s %8s %6s %12s %15s",
+                "phase", "sweeps", "seconds", "sweeps/s", "p50 ms", "p99 ms", "CPU %", "CPU ms/sweep", "heap MB gc/max"));
         for (BenchFigures.Phase p : f.phases()) {
             BenchFigures.Latency l = p.latency();
-            lines.add(String.format(Locale.ROOT, "%-8s %8d %8.1f %10.1f %8s %8s %6s %17s", p.name(), p.sweeps(), p.seconds(),
+            lines.add(String.format(Locale.ROOT, "%-8s %8d %8.1f %10.1f %8s %8s %6s %12s %15s", p.name(), p.sweeps(), p.seconds(),
                     p.sweepsPerSecond(), l == null ? "-" : number(l.p50Millis()), l == null ? "-" : number(l.p99Millis()),
-                    number(p.resources().cpuPercent()),
+                    number(p.resources().cpuPercent()), number(p.cpuMillisPerSweep()),
                     String.format(Locale.ROOT, "%.0f/%.0f", p.resources().heapAfterGcBytes() / MB, p.resources().heapMaxUsedBytes() / MB)));
         }
         Double ratio = f.serviceToRaw();
@@ -112,6 +112,7 @@ final class BenchReport {
         PhaseMeter.Resources r = p.resources();
         putFinite(n, "cpuPercent", round(r.cpuPercent(), 1));
         putFinite(n, "coresBusy", round(r.coresBusy(), 3));
+        putFinite(n, "cpuMillisPerSweep", round(p.cpuMillisPerSweep(), 3));
         n.put("heapAfterGcBytes", r.heapAfterGcBytes());
         n.put("heapMaxUsedBytes", r.heapMaxUsedBytes());
         if (p.decodeFailures() != null) {
