@@ -39,6 +39,7 @@ class BenchCommandTest {
         assertThat(phases.fieldNames()).toIterable().containsExactly("publish", "raw", "service", "latency");
         for (JsonNode phase : phases) {
             assertThat(phase.get("sweepsPerSecond").asDouble()).isPositive();
+            assertThat(phase.get("cpuMillisPerSweep").asDouble()).isPositive();
             assertThat(phase.get("heapAfterGcBytes").asLong()).isPositive();
             assertThat(phase.get("heapMaxUsedBytes").asLong()).isGreaterThanOrEqualTo(phase.get("heapAfterGcBytes").asLong() / 2);
         }
