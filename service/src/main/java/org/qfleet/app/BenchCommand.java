@@ -20,6 +20,7 @@ import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.stream.Stream;
 import org.apache.kafka.clients.admin.Admin;
 import org.apache.kafka.clients.admin.AdminClientConfig;
+import org.apache.kafka.common.KafkaException;
 import org.qfleet.app.broker.BrokerException;
 import org.qfleet.app.broker.EmbeddedBroker;
 import org.qfleet.codec.TraceForm;
@@ -274,7 +275,7 @@ final class BenchCommand implements Callable<Integer> {
         Admin admin = Admin.create(Map.copyOf(settings));
         try {
             admin.describeCluster().nodes().get(REACH_TIMEOUT.toMillis(), TimeUnit.MILLISECONDS);
-        } catch (ExecutionException | TimeoutException | org.apache.kafka.common.KafkaException e) {
+        } catch (ExecutionException | TimeoutException | KafkaException e) {
             throw new BenchException("cannot reach Kafka at " + settings.get(AdminClientConfig.BOOTSTRAP_SERVERS_CONFIG)
                     + " within " + REACH_TIMEOUT.toSeconds() + " s: " + BenchException.reason(e), e);
         } finally {
@@ -289,7 +290,7 @@ final class BenchCommand implements Callable<Integer> {
             List<String> ours = admin.listTopics().names().get(REACH_TIMEOUT.toMillis(), TimeUnit.MILLISECONDS).stream()
                     .filter(t -> run.topics().all().contains(t) || t.startsWith(run.applicationId() + "-")).toList();
             admin.deleteTopics(ours).all().get(REACH_TIMEOUT.toMillis(), TimeUnit.MILLISECONDS);
-        } catch (ExecutionException | TimeoutException | org.apache.kafka.common.KafkaException e) {
+        } catch (ExecutionException | TimeoutException | KafkaException e) {
             say(err, "could not delete the run's topics (" + BenchException.reason(e) + "); they start with qfleet-bench-");
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();

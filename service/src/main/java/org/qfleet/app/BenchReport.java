@@ -1,5 +1,6 @@
 package org.qfleet.app;
 
+import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -100,7 +101,7 @@ final class BenchReport {
         root.put("allAccounted", f.allAccounted());
         try {
             return MAPPER.writeValueAsString(root);
-        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+        } catch (JsonProcessingException e) {
             throw new IllegalStateException("cannot write the bench figures as JSON", e);
         }
     }

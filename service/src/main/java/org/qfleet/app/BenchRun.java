@@ -13,15 +13,17 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeoutException;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.BooleanSupplier;
-import java.util.function.LongSupplier;
 import org.apache.kafka.clients.admin.Admin;
 import org.apache.kafka.clients.producer.ProducerConfig;
+import org.apache.kafka.common.KafkaException;
 import org.qfleet.codec.TraceForm;
 import org.qfleet.stream.StreamService;
 import org.qfleet.stream.StreamSettings;
 import org.qfleet.stream.SweepHandler;
+import org.qfleet.stream.SweepOutcome;
 import org.qfleet.stream.TopicSetup;
 import org.qfleet.stream.Topics;
+import org.qfleet.sweep.SweepLimits;
 import org.qfleet.verdict.ProductCatalogue;
 
 /**
@@ -80,7 +82,7 @@ final class BenchRun {
         String startedAt = Instant.now().toString();
         Topics topics = topics();
         StreamSettings service = new StreamSettings(topics, applicationId(), plan.threads(),
-                org.qfleet.sweep.SweepLimits.DEFAULT, StreamSettings.DEFAULT_MAX_SWEEP_BYTES,
+                SweepLimits.DEFAULT, StreamSettings.DEFAULT_MAX_SWEEP_BYTES,
                 StreamSettings.DEFAULT_MAX_REJECT_PAYLOAD_BYTES, plan.kafka());
         say(String.format(Locale.ROOT, "simulating %d distinct sweeps of %d points", plan.distinct(), plan.points()));
         BenchSweeps sweeps = BenchSweeps.generate(plan.distinct(), plan.points(), plan.forms(), plan.seed(), runTag);
@@ -136,7 +138,7 @@ final class BenchRun {
         SweepHandler handler = new SweepHandler(service, ProductCatalogue.demoPlant());
         for (int pass = 0; pass < WARM_UP_PASSES; pass++) {
             for (byte[] message : sweeps.poolMessages()) {
-                if (!(handler.handle("warm-up", message) instanceof org.qfleet.stream.SweepOutcome.Fitted)) {
+                if (!(handler.handle("warm-up", message) instanceof SweepOutcome.Fitted)) {
                     throw new BenchException("a simulated sweep could not be fitted; the benchmark would not measure the service's normal work");
                 }
             }
@@ -147,7 +149,7 @@ final class BenchRun {
         try (Admin admin = Admin.create(clients)) {
             new TopicSetup(Map.of(topics.rejects(), 1, topics.alerts(), 1), plan.partitions(), plan.replication())
                     .createMissing(admin, topics.all(), ADMIN_TIMEOUT);
-        } catch (ExecutionException | TimeoutException | org.apache.kafka.common.KafkaException e) {
+        } catch (ExecutionException | TimeoutException | KafkaException e) {
             throw new BenchException("cannot create the topics on " + plan.broker() + ": " + BenchException.reason(e), e);
         }
         say("topics " + topics.sweeps() + " and " + topics.results() + " with " + plan.partitions() + " partitions");
@@ -184,7 +186,7 @@ final class BenchRun {
 
     private BenchFigures.Phase raw(Topics topics) throws BenchException {
         PhaseMeter meter = PhaseMeter.start();
-        RawCeiling ceiling = new RawCeiling(clients, topics.sweeps(), org.qfleet.sweep.SweepLimits.DEFAULT);
+        RawCeiling ceiling = new RawCeiling(clients, topics.sweeps(), SweepLimits.DEFAULT);
         progress.begin(BenchFigures.RAW, plan.sweeps(), ceiling::read, meter);
         RawCeiling.Result r = ceiling.run(plan.sweeps(), plan.stallTimeout(), stop);
         progress.end();
@@ -243,7 +245,7 @@ final class BenchRun {
                     plan.rateDuration().toNanos() / 1e9));
             progress.begin(BenchFigures.LATENCY, offered, () -> watcher.accounted(from, from + offered), meter);
             sent = publisher.publish(offered, plan.rate(), stop);
-        } catch (org.apache.kafka.common.KafkaException e) {
+        } catch (KafkaException e) {
             throw new BenchException("cannot publish to " + topics.sweeps() + ": " + BenchException.reason(e), e);
         }
         if (publisher.failure() != null) {

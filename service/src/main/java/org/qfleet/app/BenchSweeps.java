@@ -4,6 +4,7 @@ import java.nio.charset.StandardCharsets;
 import java.time.Clock;
 import java.time.Duration;
 import java.util.List;
+import java.util.Locale;
 import org.qfleet.codec.SweepMessageWriter;
 import org.qfleet.codec.TraceForm;
 import org.qfleet.sim.DemoPlant;
@@ -81,7 +82,7 @@ final class BenchSweeps {
 
     /** The sweep id of the {@code sequence}-th published sweep. */
     String sweepId(long sequence) {
-        return idPrefix + String.format(java.util.Locale.ROOT, "%0" + ID_DIGITS + "d", sequence);
+        return idPrefix + String.format(Locale.ROOT, "%0" + ID_DIGITS + "d", sequence);
     }
 
     /** The sequence number a sweep id of this run carries, or -1 for any other id. */
