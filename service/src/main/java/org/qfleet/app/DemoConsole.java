@@ -35,8 +35,8 @@ final class DemoConsole implements Runnable, AutoCloseable {
     private final String resultsTopic;
     private final String alertsTopic;
     private final PrintWriter alertsOut;
-    private final LatencyRecorder recentLatency = new LatencyRecorder(20_000);
-    private final LatencyRecorder allLatency = new LatencyRecorder(200_000);
+    private final LatencyRecorder recentLatency = new LatencyRecorder();
+    private final LatencyRecorder allLatency = new LatencyRecorder();
     private final Map<String, String> latestByStation = new TreeMap<>();
     private final Map<String, Long> lotLastSeen = new HashMap<>();
     private final Map<String, Long> verdicts = new TreeMap<>();

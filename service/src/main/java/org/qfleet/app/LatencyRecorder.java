@@ -1,42 +1,45 @@
 package org.qfleet.app;
 
-import java.util.Arrays;
+import org.HdrHistogram.Histogram;
 
 /**
- * End-to-end latencies in milliseconds, for percentiles. Keeps at most a bounded number of
- * samples (the most recent), so a long demo does not grow without bound. Not thread-safe.
+ * Latencies for percentiles, in whatever unit the caller records (milliseconds in the demo,
+ * microseconds in {@code bench}): an HdrHistogram with three significant digits, so memory stays
+ * bounded however long a run lasts and values below 2048 units are kept exactly. Negative values
+ * (clocks of two hosts that disagree) count as 0. Not thread-safe.
  */
 final class LatencyRecorder {
 
-    private final long[] samples;
-    private long count;
+    private static final int SIGNIFICANT_DIGITS = 3;
 
-    LatencyRecorder(int capacity) {
-        this.samples = new long[capacity];
-    }
+    private final Histogram histogram = new Histogram(SIGNIFICANT_DIGITS);
 
-    void add(long millis) {
-        samples[(int) (count % samples.length)] = millis;
-        count++;
+    void add(long value) {
+        histogram.recordValue(Math.max(0, value));
     }
 
     long count() {
-        return count;
+        return histogram.getTotalCount();
     }
 
-    /** The {@code p}-th percentile (0 to 100) of the kept samples by the nearest-rank method; -1 when empty. */
+    /**
+     * The {@code p}-th percentile (0 to 100) by the nearest-rank method, to three significant
+     * digits; -1 when empty.
+     */
     long percentile(double p) {
-        int n = (int) Math.min(count, samples.length);
-        if (n == 0) {
-            return -1;
-        }
-        long[] sorted = Arrays.copyOf(samples, n);
-        Arrays.sort(sorted);
-        int rank = (int) Math.ceil(p / 100 * n);
-        return sorted[Math.max(0, Math.min(n - 1, rank - 1))];
+        return count() == 0 ? -1 : histogram.getValueAtPercentile(p);
+    }
+
+    /** The largest value recorded, to three significant digits; -1 when empty. */
+    long max() {
+        return count() == 0 ? -1 : histogram.getMaxValue();
+    }
+
+    double mean() {
+        return count() == 0 ? Double.NaN : histogram.getMean();
     }
 
     void clear() {
-        count = 0;
+        histogram.reset();
     }
 }

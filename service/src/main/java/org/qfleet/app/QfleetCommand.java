@@ -11,7 +11,7 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Resonator f0, loaded and unloaded Q and coupling from network-analyzer sweeps.",
-        subcommands = {FitCommand.class, RunCommand.class, DemoCommand.class, SimulateCommand.class},
+        subcommands = {FitCommand.class, RunCommand.class, DemoCommand.class, SimulateCommand.class, BenchCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
             "0:success",

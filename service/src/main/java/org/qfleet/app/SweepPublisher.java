@@ -18,25 +18,39 @@ import org.qfleet.sim.DemoPlant;
 import org.qfleet.sweep.Sweep;
 
 /**
- * Publishes the simulated plant's sweeps as sweep messages (key: the lot id) at a steady rate,
- * the way a plant's test stations would. Used by {@code simulate} and {@code demo}.
+ * Publishes sweep messages (key: the lot id) at a steady rate, the way a plant's test stations
+ * would: the simulated plant's sweeps for {@code simulate} and {@code demo}, or messages made
+ * beforehand for {@code bench}.
  */
 final class SweepPublisher implements AutoCloseable {
 
+    /** One message to publish: its key (the lot id) and value (the sweep message), as bytes. */
+    record Outgoing(byte[] key, byte[] value) {
+    }
+
+    /** The messages to publish: the {@code n}-th one (from 0), made when it is due. */
+    @FunctionalInterface
+    interface Messages {
+        Outgoing message(long n);
+    }
+
     private final KafkaProducer<byte[], byte[]> producer;
     private final String topic;
-    private final DemoPlant plant;
-    private final List<TraceForm> forms;
+    private final Messages messages;
     private final AtomicLong sent = new AtomicLong();
     private final AtomicLong acknowledged = new AtomicLong();
     private final AtomicReference<Exception> failure = new AtomicReference<>();
+
+    /** The plant's sweeps, written with {@code forms} in turn, one sweep each. */
+    SweepPublisher(Map<String, Object> kafka, String topic, DemoPlant plant, List<TraceForm> forms) {
+        this(kafka, topic, plantMessages(plant, forms));
+    }
 
     /**
      * @param kafka Kafka client settings, with {@code bootstrap.servers}; they win over the
      *              publisher's defaults (idempotent, acks=all, lz4)
      */
-    /** @param forms trace forms, used in turn, one sweep each */
-    SweepPublisher(Map<String, Object> kafka, String topic, DemoPlant plant, List<TraceForm> forms) {
+    SweepPublisher(Map<String, Object> kafka, String topic, Messages messages) {
         Map<String, Object> config = new java.util.HashMap<>();
         config.put(ProducerConfig.ACKS_CONFIG, "all");
         config.put(ProducerConfig.ENABLE_IDEMPOTENCE_CONFIG, "true");
@@ -46,8 +60,16 @@ final class SweepPublisher implements AutoCloseable {
         config.putAll(kafka);
         this.producer = new KafkaProducer<>(config, new ByteArraySerializer(), new ByteArraySerializer());
         this.topic = topic;
-        this.plant = plant;
-        this.forms = List.copyOf(forms);
+        this.messages = messages;
+    }
+
+    private static Messages plantMessages(DemoPlant plant, List<TraceForm> forms) {
+        List<SweepMessageWriter> writers = forms.stream().map(SweepMessageWriter::new).toList();
+        return n -> {
+            Sweep sweep = plant.next().sweep();
+            return new Outgoing(sweep.info().lot().getBytes(StandardCharsets.UTF_8),
+                    writers.get((int) (n % writers.size())).write(sweep));
+        };
     }
 
     /**
@@ -57,7 +79,6 @@ final class SweepPublisher implements AutoCloseable {
      * @return how many were sent
      */
     long publish(long count, double ratePerSecond, BooleanSupplier stop) throws InterruptedException {
-        List<SweepMessageWriter> writers = forms.stream().map(SweepMessageWriter::new).toList();
         long start = System.nanoTime();
         long n = 0;
         while ((count == 0 || n < count) && !stop.getAsBoolean() && failure.get() == null) {
@@ -68,10 +89,9 @@ final class SweepPublisher implements AutoCloseable {
                     Thread.sleep(wait / 1_000_000, (int) (wait % 1_000_000));
                 }
             }
-            Sweep sweep = plant.next().sweep();
-            byte[] key = sweep.info().lot().getBytes(StandardCharsets.UTF_8);
+            Outgoing message = messages.message(n);
             try {
-                producer.send(new ProducerRecord<>(topic, key, writers.get((int) (n % writers.size())).write(sweep)), (metadata, e) -> {
+                producer.send(new ProducerRecord<>(topic, message.key(), message.value()), (metadata, e) -> {
                     if (e == null) {
                         acknowledged.incrementAndGet();
                     } else {
@@ -86,6 +106,11 @@ final class SweepPublisher implements AutoCloseable {
             sent.set(n);
         }
         return n;
+    }
+
+    /** Fetches the topic's metadata now, so that the first send does not wait for it. */
+    void connect() {
+        producer.partitionsFor(topic);
     }
 
     /** Sweeps handed to the producer so far. */

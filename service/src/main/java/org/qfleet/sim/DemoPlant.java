@@ -38,9 +38,22 @@ public final class DemoPlant {
     private final Map<String, Integer> lotsOpened = new HashMap<>();
     private final Map<String, Double> pendingQuLoss = new HashMap<>();
     private final Map<String, StationFault> faults = new HashMap<>();
+    private final int points;
     private long sequence;
 
     public DemoPlant(long seed, Clock clock) {
+        this(seed, clock, 0);
+    }
+
+    /**
+     * A plant whose stations sweep {@code points} points over each product's usual span (for
+     * benchmarks at other sizes), or the product's own number when {@code points} is 0.
+     */
+    public DemoPlant(long seed, Clock clock, int points) {
+        if (points != 0 && points < 2) {
+            throw new IllegalArgumentException("points must be 0 (the product's own) or at least 2, got " + points);
+        }
+        this.points = points;
         this.random = new SplittableRandom(seed);
         this.simulator = new SweepSimulator(random.nextLong());
         this.clock = Objects.requireNonNull(clock, "clock");
@@ -92,7 +105,8 @@ public final class DemoPlant {
                 Math.round((23 + 0.3 * random.nextGaussian()) * 10) / 10.0);
         ResonatorCircuit circuit = unitCircuit(product, lot.quFactor(), fault);
         double snrDb = station.snrDb() + random.nextDouble(-1, 1) - (fault == null ? 0 : fault.snrLossDb());
-        return simulator.simulate(circuit, product.sweepPlan(), station.fixture().withSnrDb(snrDb), info);
+        SweepPlan plan = points == 0 ? product.sweepPlan() : SweepPlan.centred(product.f0Hz(), product.spanHz(), points);
+        return simulator.simulate(circuit, plan, station.fixture().withSnrDb(snrDb), info);
     }
 
     /**

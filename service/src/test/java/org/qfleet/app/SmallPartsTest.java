@@ -13,24 +13,33 @@ class SmallPartsTest {
     @Test
     void percentilesFollowTheNearestRankMethod() {
         // Nearest-rank percentile: the value at rank ceil(p/100 * n) of the sorted samples (common practice).
-        LatencyRecorder latencies = new LatencyRecorder(1000);
+        LatencyRecorder latencies = new LatencyRecorder();
         for (int i = 100; i >= 1; i--) {
             latencies.add(i);
         }
         assertThat(latencies.percentile(50)).isEqualTo(50);
         assertThat(latencies.percentile(99)).isEqualTo(99);
         assertThat(latencies.percentile(100)).isEqualTo(100);
-        assertThat(new LatencyRecorder(10).percentile(50)).isEqualTo(-1);
+        assertThat(new LatencyRecorder().percentile(50)).isEqualTo(-1);
     }
 
     @Test
-    void theRecorderKeepsTheMostRecentSamples() {
-        LatencyRecorder latencies = new LatencyRecorder(3);
-        for (long v : new long[] {1000, 1000, 1, 2, 3}) {
+    void theRecorderKeepsThreeSignificantDigitsAndStartsAfreshWhenCleared() {
+        LatencyRecorder latencies = new LatencyRecorder();
+        for (long v : new long[] {1_000_000, 1_000_000, 1, 2, 3}) {
             latencies.add(v);
         }
-        assertThat(latencies.percentile(100)).isEqualTo(3);
         assertThat(latencies.count()).isEqualTo(5);
+        assertThat(latencies.percentile(40)).isEqualTo(2);
+        // HdrHistogram keeps three significant digits: within 0.1 % of the value.
+        assertThat(latencies.max()).isBetween(1_000_000L, 1_001_000L);
+        latencies.add(-5);
+        assertThat(latencies.percentile(0)).isZero();
+
+        latencies.clear();
+        latencies.add(7);
+        assertThat(latencies.count()).isEqualTo(1);
+        assertThat(latencies.percentile(100)).isEqualTo(7);
     }
 
     @Test

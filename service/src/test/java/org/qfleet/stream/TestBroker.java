@@ -17,14 +17,14 @@ import org.qfleet.app.broker.EmbeddedBroker;
  * under {@code target/}, started on first use and stopped when the JVM exits. Each test class
  * works on topics and an application id of its own.
  */
-final class TestBroker {
+public final class TestBroker {
 
     private static EmbeddedBroker broker;
 
     private TestBroker() {
     }
 
-    static synchronized EmbeddedBroker get() throws Exception {
+    public static synchronized EmbeddedBroker get() throws Exception {
         if (broker == null) {
             Path dir = Files.createTempDirectory(Files.createDirectories(Paths.get("target", "test-brokers")), "broker-");
             broker = EmbeddedBroker.start(dir, 0, false);
