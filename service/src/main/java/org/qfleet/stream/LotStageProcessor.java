@@ -19,8 +19,14 @@ import org.qfleet.drift.ProductState;
  */
 final class LotStageProcessor extends ContextualProcessor<String, byte[], String, byte[]> {
 
+    /** Lots a task keeps decoded (open lots, in practice); others are decoded from the store when they come back. */
+    private static final int DECODED_LOTS = 256;
+    private static final int DECODED_PRODUCTS = 256;
+
     private final LotMonitor monitor;
     private final AlertJson alertJson = new AlertJson();
+    private final DecodedStates<ProductState> productStates = new DecodedStates<>(ProductState.class, DECODED_PRODUCTS);
+    private final DecodedStates<LotState> lotStates = new DecodedStates<>(LotState.class, DECODED_LOTS);
     private KeyValueStore<String, byte[]> products;
     private KeyValueStore<String, byte[]> lots;
 
@@ -36,33 +42,39 @@ final class LotStageProcessor extends ContextualProcessor<String, byte[], String
         super.init(context);
         products = context.getStateStore(DriftTopology.PRODUCTS_STORE);
         lots = context.getStateStore(DriftTopology.LOTS_STORE);
+        productStates.clear();
+        lotStates.clear();
     }
 
     @Override
     public void process(Record<String, byte[]> record) {
         Measurement m = DriftJson.read(record.value(), Measurement.class);
-        ProductState before = DriftJson.read(products.get(m.product()), ProductState.class);
+        ProductState before = productStates.read(m.product(), products.get(m.product()));
         List<LotState> updated = new ArrayList<>();
         List<String> closed = new ArrayList<>();
         LotMonitor.Outcome outcome = monitor.accept(before, m, new LotMonitor.LotStore() {
             @Override
             public LotState get(String product, String lot) {
-                return DriftJson.read(lots.get(product + "/" + lot), LotState.class);
+                String key = product + "/" + lot;
+                return lotStates.read(key, lots.get(key));
             }
 
             @Override
             public void put(LotState state) {
-                lots.put(state.product() + "/" + state.lot(), DriftJson.write(state));
+                String key = state.product() + "/" + state.lot();
+                lots.put(key, lotStates.write(key, state));
                 updated.add(state);
             }
 
             @Override
             public void delete(String product, String lot) {
-                lots.delete(product + "/" + lot);
+                String key = product + "/" + lot;
+                lots.delete(key);
+                lotStates.remove(key);
                 closed.add(lot);
             }
         });
-        products.put(m.product(), DriftJson.write(outcome.product()));
+        products.put(m.product(), productStates.write(m.product(), outcome.product()));
         for (Alert a : outcome.alerts()) {
             context().forward(record.withKey(a.key()).withValue(DriftRecords.alert(alertJson.write(a))));
             observer.alertPublished(a);
