@@ -1,8 +1,14 @@
 package org.qfleet.bench;
 
 import java.nio.charset.StandardCharsets;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.ZoneOffset;
 import java.util.Map;
 import java.util.SplittableRandom;
+import org.qfleet.codec.SweepMessageWriter;
+import org.qfleet.codec.TraceForm;
+import org.qfleet.sim.DemoPlant;
 import org.qfleet.sim.Impairments;
 import org.qfleet.sim.ResonatorCircuit;
 import org.qfleet.sim.SweepPlan;
@@ -80,6 +86,20 @@ final class BenchSweeps {
         array(json, s21.im());
         json.append("}}");
         return json.toString().getBytes(StandardCharsets.UTF_8);
+    }
+
+    /**
+     * The first {@code count} sweep messages of the invented demo plant (seed 1), as its stations
+     * publish them: 401 points, S21, S11 and S22 in the given form (about 53 kB each as re/im).
+     */
+    static byte[][] plantMessages(int count, TraceForm form) {
+        DemoPlant plant = new DemoPlant(1, Clock.fixed(Instant.parse("2024-05-17T09:30:00Z"), ZoneOffset.UTC));
+        SweepMessageWriter writer = new SweepMessageWriter(form);
+        byte[][] messages = new byte[count][];
+        for (int i = 0; i < count; i++) {
+            messages[i] = writer.write(plant.next().sweep());
+        }
+        return messages;
     }
 
     private static void array(StringBuilder json, double[] values) {

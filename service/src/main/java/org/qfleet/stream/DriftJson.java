@@ -1,7 +1,10 @@
 package org.qfleet.stream;
 
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.databind.DeserializationFeature;
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import java.io.IOException;
@@ -20,8 +23,14 @@ import org.qfleet.drift.Measurement;
  */
 final class DriftJson {
 
+    /**
+     * Numbers are written and read with Jackson's fast shortest-representation writer and fast
+     * parser (the state records are mostly doubles); both round-trip every double exactly.
+     */
     private static final ObjectMapper MAPPER = JsonMapper.builder()
             .disable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
+            .enable(StreamReadFeature.USE_FAST_DOUBLE_PARSER)
+            .enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
             .build();
 
     private DriftJson() {
@@ -48,46 +57,103 @@ final class DriftJson {
 
     /**
      * The drift view of a result message, or empty when it lacks what drift needs (product, lot,
-     * station, unit, a measuredAt in RFC 3339). The
-     * coupling level is the insertion loss (minus {@code resonanceDb}) of transmission results.
+     * station, unit, a measuredAt in RFC 3339). The coupling level is the insertion loss (minus
+     * {@code resonanceDb}) of transmission results. Reads the message with the streaming parser
+     * and keeps only these fields: the rest of the result is skipped, not built into a tree.
      */
     static Optional<Measurement> measurement(byte[] result) {
-        JsonNode r;
-        try {
-            r = MAPPER.readTree(result);
+        ResultFields r = new ResultFields();
+        try (JsonParser parser = MAPPER.getFactory().createParser(result)) {
+            if (parser.nextToken() != JsonToken.START_OBJECT) {
+                return Optional.empty();
+            }
+            JsonToken token;
+            while ((token = parser.nextToken()) == JsonToken.FIELD_NAME) {
+                String name = parser.currentName();
+                parser.nextToken();
+                r.read(name, parser);
+            }
+            if (token != JsonToken.END_OBJECT) {
+                return Optional.empty();
+            }
         } catch (IOException | RuntimeException e) {
             return Optional.empty();
         }
-        if (r == null || !r.isObject()) {
-            return Optional.empty();
-        }
-        String product = text(r, "product");
-        String lot = text(r, "lot");
-        String station = text(r, "stationId");
-        String unit = text(r, "unit");
-        String measuredAt = text(r, "measuredAt");
-        if (product == null || lot == null || station == null || unit == null || measuredAt == null) {
+        if (r.product == null || r.lot == null || r.station == null || r.unit == null || r.measuredAt == null) {
             return Optional.empty();
         }
         long at;
         try {
-            at = OffsetDateTime.parse(measuredAt).toInstant().toEpochMilli();
+            at = OffsetDateTime.parse(r.measuredAt).toInstant().toEpochMilli();
         } catch (DateTimeParseException e) {
             return Optional.empty();
         }
-        List<String> flags = new ArrayList<>();
-        r.path("flags").forEach(f -> flags.add(f.asText()));
-        double level = "transmission".equals(text(r, "topology")) ? -number(r, "resonanceDb") : Double.NaN;
-        return Optional.of(new Measurement(product, lot, station, unit, at, number(r, "qUnloaded"), number(r, "f0Hz"), level, flags));
+        double level = "transmission".equals(r.topology) ? -r.resonanceDb : Double.NaN;
+        return Optional.of(new Measurement(r.product, r.lot, r.station, r.unit, at, r.qUnloaded, r.f0Hz, level, r.flags));
     }
 
-    private static String text(JsonNode r, String field) {
-        JsonNode n = r.get(field);
-        return n != null && n.isTextual() && !n.asText().isBlank() ? n.asText() : null;
-    }
+    /** The fields of a result message that drift uses; a text field that is blank or not a string counts as absent. */
+    private static final class ResultFields {
+        String product;
+        String lot;
+        String station;
+        String unit;
+        String measuredAt;
+        String topology;
+        double qUnloaded = Double.NaN;
+        double f0Hz = Double.NaN;
+        double resonanceDb = Double.NaN;
+        List<String> flags = List.of();
 
-    private static double number(JsonNode r, String field) {
-        JsonNode n = r.get(field);
-        return n != null && n.isNumber() ? n.asDouble() : Double.NaN;
+        void read(String name, JsonParser parser) throws IOException {
+            switch (name) {
+                case "product" -> product = text(parser);
+                case "lot" -> lot = text(parser);
+                case "stationId" -> station = text(parser);
+                case "unit" -> unit = text(parser);
+                case "measuredAt" -> measuredAt = text(parser);
+                case "topology" -> topology = text(parser);
+                case "qUnloaded" -> qUnloaded = number(parser);
+                case "f0Hz" -> f0Hz = number(parser);
+                case "resonanceDb" -> resonanceDb = number(parser);
+                case "flags" -> flags = strings(parser);
+                default -> parser.skipChildren();
+            }
+        }
+
+        private static String text(JsonParser parser) throws IOException {
+            if (parser.currentToken() != JsonToken.VALUE_STRING) {
+                parser.skipChildren();
+                return null;
+            }
+            String text = parser.getText();
+            return text.isBlank() ? null : text;
+        }
+
+        private static double number(JsonParser parser) throws IOException {
+            if (!parser.currentToken().isNumeric()) {
+                parser.skipChildren();
+                return Double.NaN;
+            }
+            return parser.getDoubleValue();
+        }
+
+        private static List<String> strings(JsonParser parser) throws IOException {
+            if (parser.currentToken() != JsonToken.START_ARRAY) {
+                parser.skipChildren();
+                return List.of();
+            }
+            List<String> values = new ArrayList<>();
+            JsonToken token;
+            while ((token = parser.nextToken()) != JsonToken.END_ARRAY) {
+                if (token.isStructStart()) {
+                    parser.skipChildren();
+                    values.add("");
+                } else {
+                    values.add(parser.getText());
+                }
+            }
+            return values;
+        }
     }
 }

@@ -16,8 +16,12 @@ import org.qfleet.drift.ProductState;
  */
 final class LotStageProcessor extends ContextualProcessor<String, byte[], String, byte[]> {
 
+    /** Products a task keeps decoded; others are decoded from the store when they come back. */
+    private static final int DECODED_PRODUCTS = 256;
+
     private final LotMonitor monitor;
     private final AlertJson alertJson = new AlertJson();
+    private final DecodedStates<ProductState> productStates = new DecodedStates<>(ProductState.class, DECODED_PRODUCTS);
     private KeyValueStore<String, byte[]> products;
     private LotStores lots;
 
@@ -32,15 +36,16 @@ final class LotStageProcessor extends ContextualProcessor<String, byte[], String
     public void init(ProcessorContext<String, byte[]> context) {
         super.init(context);
         products = context.getStateStore(DriftTopology.PRODUCTS_STORE);
+        productStates.clear();
         lots = new LotStores(context.getStateStore(DriftTopology.LOTS_STORE), context.getStateStore(DriftTopology.UNITS_STORE));
     }
 
     @Override
     public void process(Record<String, byte[]> record) {
         Measurement m = DriftJson.read(record.value(), Measurement.class);
-        ProductState before = DriftJson.read(products.get(m.product()), ProductState.class);
+        ProductState before = productStates.read(m.product(), products.get(m.product()));
         LotMonitor.Outcome outcome = monitor.accept(before, m, lots);
-        products.put(m.product(), DriftJson.write(outcome.product()));
+        products.put(m.product(), productStates.write(m.product(), outcome.product()));
         for (Alert a : outcome.alerts()) {
             context().forward(record.withKey(a.key()).withValue(DriftRecords.alert(alertJson.write(a))));
             observer.alertPublished(a);

@@ -18,11 +18,14 @@ import org.qfleet.drift.UnitValue;
 final class LotStores implements LotMonitor.LotStore {
 
     private static final char SEPARATOR = '\u001f';
+    /** Lots a task keeps decoded (open lots, in practice); others are decoded from the store when they come back. */
+    private static final int DECODED_LOTS = 256;
 
     private final KeyValueStore<String, byte[]> lots;
     private final KeyValueStore<String, byte[]> units;
     private final List<LotState> updated = new ArrayList<>();
     private final List<String> closed = new ArrayList<>();
+    private final DecodedStates<LotState> decoded = new DecodedStates<>(LotState.class, DECODED_LOTS);
 
     LotStores(KeyValueStore<String, byte[]> lots, KeyValueStore<String, byte[]> units) {
         this.lots = lots;
@@ -31,18 +34,21 @@ final class LotStores implements LotMonitor.LotStore {
 
     @Override
     public LotState get(String product, String lot) {
-        return DriftJson.read(lots.get(lotKey(product, lot)), LotState.class);
+        String key = lotKey(product, lot);
+        return decoded.read(key, lots.get(key));
     }
 
     @Override
     public void put(LotState state) {
-        lots.put(lotKey(state.product(), state.lot()), DriftJson.write(state));
+        String key = lotKey(state.product(), state.lot());
+        lots.put(key, decoded.write(key, state));
         updated.add(state);
     }
 
     @Override
     public void delete(String product, String lot) {
         lots.delete(lotKey(product, lot));
+        decoded.remove(lotKey(product, lot));
         List<String> keys = new ArrayList<>();
         try (KeyValueIterator<String, byte[]> it = units.prefixScan(unitPrefix(product, lot), new StringSerializer())) {
             while (it.hasNext()) {

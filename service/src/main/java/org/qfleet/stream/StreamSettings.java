@@ -4,6 +4,7 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.Properties;
 import org.apache.kafka.clients.consumer.ConsumerConfig;
+import org.apache.kafka.clients.producer.ProducerConfig;
 import org.apache.kafka.common.serialization.Serdes;
 import org.apache.kafka.streams.StreamsConfig;
 import org.apache.kafka.streams.errors.LogAndContinueExceptionHandler;
@@ -36,6 +37,20 @@ public record StreamSettings(
     /** A 100 001-point sweep with three complex traces as text is about 10 MB. */
     public static final int DEFAULT_MAX_SWEEP_BYTES = 16 * 1024 * 1024;
     public static final int DEFAULT_MAX_REJECT_PAYLOAD_BYTES = 64 * 1024;
+    /**
+     * Producer batches of up to 256 KiB: drift state records (a lot's units as JSON) reach tens of
+     * kilobytes, more than the client's default of 16 KiB, which would send each alone.
+     */
+    static final int PRODUCER_BATCH_BYTES = 256 * 1024;
+    /** Up to 4 MiB per partition and fetch: about 80 sweep messages of 401 points instead of 20. */
+    static final int FETCH_PARTITION_BYTES = 4 * 1024 * 1024;
+    /**
+     * A transaction every 250 ms per stream thread rather than Kafka Streams' 100 ms under
+     * exactly-once: on a busy host the previous commit's markers were often still being written
+     * when the next transaction began (CONCURRENT_TRANSACTIONS retries); results become visible
+     * up to 150 ms later.
+     */
+    static final int COMMIT_INTERVAL_MS = 250;
 
     /** Settings read by the exception handlers from the Streams configuration. */
     static final String REJECTS_TOPIC_CONFIG = "qfleet.rejects.topic";
@@ -88,17 +103,23 @@ public record StreamSettings(
 
     /**
      * The Kafka Streams configuration: exactly-once (v2), byte-array serdes, reading from the
-     * earliest offset when the application id is new, bad records turned into rejects; then the
-     * pass-through settings, which override any of these.
+     * earliest offset when the application id is new, bad records turned into rejects, a commit
+     * (transaction) every 250 ms, lz4 compression and larger batches and fetches for the producers
+     * and consumers of every topic (results, rejects, alerts, repartition and changelog topics:
+     * JSON compresses several times); then the pass-through settings, which override any of these.
      */
     public Properties streamsProperties() {
         Properties p = new Properties();
         p.put(StreamsConfig.APPLICATION_ID_CONFIG, applicationId);
         p.put(StreamsConfig.PROCESSING_GUARANTEE_CONFIG, StreamsConfig.EXACTLY_ONCE_V2);
         p.put(StreamsConfig.NUM_STREAM_THREADS_CONFIG, Integer.toString(threads));
+        p.put(StreamsConfig.COMMIT_INTERVAL_MS_CONFIG, Integer.toString(COMMIT_INTERVAL_MS));
         p.put(StreamsConfig.DEFAULT_KEY_SERDE_CLASS_CONFIG, Serdes.ByteArraySerde.class.getName());
         p.put(StreamsConfig.DEFAULT_VALUE_SERDE_CLASS_CONFIG, Serdes.ByteArraySerde.class.getName());
         p.put(StreamsConfig.consumerPrefix(ConsumerConfig.AUTO_OFFSET_RESET_CONFIG), "earliest");
+        p.put(StreamsConfig.consumerPrefix(ConsumerConfig.MAX_PARTITION_FETCH_BYTES_CONFIG), Integer.toString(FETCH_PARTITION_BYTES));
+        p.put(StreamsConfig.producerPrefix(ProducerConfig.COMPRESSION_TYPE_CONFIG), "lz4");
+        p.put(StreamsConfig.producerPrefix(ProducerConfig.BATCH_SIZE_CONFIG), Integer.toString(PRODUCER_BATCH_BYTES));
         p.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, LogAndContinueExceptionHandler.class.getName());
         p.put(StreamsConfig.PRODUCTION_EXCEPTION_HANDLER_CLASS_CONFIG, OversizedResultHandler.class.getName());
         p.put(StreamsConfig.PROCESSING_EXCEPTION_HANDLER_CLASS_CONFIG, UnexpectedFailureHandler.class.getName());

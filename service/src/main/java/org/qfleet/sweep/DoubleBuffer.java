@@ -12,8 +12,13 @@ final class DoubleBuffer {
     private int size;
 
     DoubleBuffer(int limit) {
+        this(limit, INITIAL_CAPACITY);
+    }
+
+    /** A buffer that starts with room for {@code expected} values (at most {@code limit}). */
+    DoubleBuffer(int limit, int expected) {
         this.limit = limit;
-        this.values = new double[Math.min(limit, INITIAL_CAPACITY)];
+        this.values = new double[Math.max(1, Math.min(limit, expected))];
     }
 
     /** Appends a value; false (and nothing appended) when the buffer already holds {@code limit} values. */

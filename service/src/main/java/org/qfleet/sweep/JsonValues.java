@@ -14,6 +14,8 @@ final class JsonValues {
 
     private final JsonParser parser;
     private final int maxPoints;
+    /** Length of the last array read: every array of a sweep message has as many values as the first. */
+    private int lastLength;
 
     JsonValues(JsonParser parser, int maxPoints) {
         this.parser = parser;
@@ -29,12 +31,16 @@ final class JsonValues {
         return token;
     }
 
-    /** An array of finite numbers; {@code name.key} (or {@code name}) labels it in errors. */
+    /**
+     * An array of finite numbers; {@code name.key} (or {@code name}) labels it in errors. The buffer
+     * starts at the length of the previous array, so the arrays after the first are filled in
+     * place, without growing or a final copy.
+     */
     double[] numbers(String name, String key) throws IOException, InvalidSweepException {
         if (parser.currentToken() != JsonToken.START_ARRAY) {
             throw wrongType(label(name, key), "an array of numbers");
         }
-        DoubleBuffer buffer = new DoubleBuffer(maxPoints);
+        DoubleBuffer buffer = lastLength > 0 ? new DoubleBuffer(maxPoints, lastLength) : new DoubleBuffer(maxPoints);
         JsonToken token;
         while ((token = next()) != JsonToken.END_ARRAY) {
             if (token != JsonToken.VALUE_NUMBER_FLOAT && token != JsonToken.VALUE_NUMBER_INT) {
@@ -52,6 +58,7 @@ final class JsonValues {
         if (buffer.size() == 0) {
             throw new InvalidSweepException(SweepError.EMPTY_ARRAY, label(name, key) + " is empty");
         }
+        lastLength = buffer.size();
         return buffer.toArray();
     }
 

@@ -49,6 +49,11 @@ class TwoInstancesTest {
             TopicReader.readUntil(bootstrap, topics.results(),
                     m -> m.stream().map(r -> r.value().get("sweepId").asText()).collect(Collectors.toSet()).containsAll(ids),
                     WAIT, "a result for each of " + SWEEPS + " sweeps");
+            // stateful drift tasks move once their state is restored, possibly after the results are complete
+            long deadline = System.nanoTime() + WAIT.toNanos();
+            while (two.activeTasks() < TASKS && System.nanoTime() < deadline) {
+                Thread.sleep(100);
+            }
             assertThat(two.activeTasks()).isEqualTo(TASKS);
         }
         Map<String, Integer> resultsPerSweep = new HashMap<>();
