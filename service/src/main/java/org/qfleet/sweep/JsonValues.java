@@ -46,7 +46,7 @@ final class JsonValues {
             if (token != JsonToken.VALUE_NUMBER_FLOAT && token != JsonToken.VALUE_NUMBER_INT) {
                 throw wrongType(label(name, key) + "[" + buffer.size() + "]", "a number");
             }
-            double value = parser.getDoubleValue();
+            double value = tokenValue();
             if (!Double.isFinite(value)) {
                 throw nonFinite(label(name, key) + "[" + buffer.size() + "]");
             }
@@ -60,6 +60,16 @@ final class JsonValues {
         }
         lastLength = buffer.size();
         return buffer.toArray();
+    }
+
+    /**
+     * The current number token's value, converted from the parser's own characters by
+     * {@link DecimalParser} (exactly {@link Double#parseDouble}'s result, several times faster than
+     * the parser's conversion, which took a fifth of the service's time).
+     */
+    private double tokenValue() throws IOException {
+        int offset = parser.getTextOffset();
+        return DecimalParser.parse(parser.getTextCharacters(), offset, offset + parser.getTextLength());
     }
 
     double number(String name) throws IOException, InvalidSweepException {

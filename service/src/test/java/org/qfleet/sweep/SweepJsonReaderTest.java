@@ -9,6 +9,7 @@ import java.io.InputStream;
 import java.io.SequenceInputStream;
 import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 import org.assertj.core.api.AbstractThrowableAssert;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -48,6 +49,30 @@ class SweepJsonReaderTest {
                 .without("s21").with("s11", trace).bytes());
         assertThat(reflection.topology()).isEqualTo(Topology.REFLECTION);
         assertThat(reflection.traces()).containsOnlyKeys(SParameter.S11);
+    }
+
+    @Test
+    void numbersInEveryJsonSpellingAreReadExactlyAsDoubleParseDouble() throws Exception {
+        // JSON number grammar (RFC 8259, section 6): integers, fractions, exponents with either case and sign,
+        // more digits than a double holds, and random doubles as Java prints them; the reference is the JDK.
+        String[] spelled = {"0", "-0", "7", "-12", "0.5", "-0.000125", "1e3", "1E-3", "2.5e+2", "-6.551601734243408E-4",
+            "123456789012345678901234567890", "0.30000000000000004", "4.9e-324", "1.7976931348623157e308",
+            "9007199254740993", "2.2250738585072011e-308", "1.00000000000000011102230246251565404236316680908203125"};
+        java.util.SplittableRandom random = new java.util.SplittableRandom(5);
+        List<String> all = new java.util.ArrayList<>(List.of(spelled));
+        for (int i = 0; i < 500; i++) {
+            all.add(Double.toString(Double.longBitsToDouble(random.nextLong() & 0x7FEF_FFFF_FFFF_FFFFL) * (random.nextBoolean() ? 1 : -1)));
+            all.add(String.format(java.util.Locale.ROOT, "%.17g", random.nextDouble(-1, 1)));
+        }
+        String array = "[" + String.join(",", all) + "]";
+        String freq = "[" + java.util.stream.IntStream.range(0, all.size()).mapToObj(i -> Integer.toString(1_000_000 + i))
+                .collect(java.util.stream.Collectors.joining(",")) + "]";
+        Sweep sweep = reader.read("m", SweepMessage.valid().with("frequencyHz", freq)
+                .with("s21", "{\"re\":" + array + ",\"im\":" + array + "}").bytes());
+        double[] re = sweep.trace(SParameter.S21).orElseThrow().re();
+        for (int i = 0; i < all.size(); i++) {
+            assertThat(Double.doubleToRawLongBits(re[i])).as(all.get(i)).isEqualTo(Double.doubleToRawLongBits(Double.parseDouble(all.get(i))));
+        }
     }
 
     @Test
