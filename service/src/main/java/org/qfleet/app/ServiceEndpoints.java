@@ -1,7 +1,6 @@
 package org.qfleet.app;
 
 import io.micrometer.core.instrument.MeterRegistry;
-import io.micrometer.prometheusmetrics.PrometheusConfig;
 import io.micrometer.prometheusmetrics.PrometheusMeterRegistry;
 import java.net.BindException;
 import java.util.function.Supplier;
@@ -13,6 +12,7 @@ import org.qfleet.app.http.MetricsHandler;
 import org.qfleet.app.http.Readiness;
 import org.qfleet.app.http.ReadinessHandler;
 import org.qfleet.app.metrics.JvmMeters;
+import org.qfleet.app.metrics.PrometheusNaming;
 import org.qfleet.app.metrics.ReadyGauge;
 import org.qfleet.app.metrics.ServiceMetrics;
 import org.qfleet.app.status.FleetView;
@@ -63,7 +63,7 @@ final class ServiceEndpoints implements AutoCloseable {
         } catch (HttpStartException e) {
             throw new ServiceException(e.getMessage(), e);
         }
-        PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
+        PrometheusMeterRegistry registry = PrometheusNaming.registry();
         JvmMeters jvm = new JvmMeters(registry);
         ServiceMetrics metrics = new ServiceMetrics(registry);
         ReadyGauge.bind(registry, () -> readiness.get().ready());
