@@ -72,7 +72,7 @@ final class BenchCommand implements Callable<Integer> {
             description = "A Kafka client or Streams setting for every client of the run (repeatable), e.g. --kafka security.protocol=SSL.")
     Map<String, String> kafka;
 
-    @Option(names = "--sweeps", paramLabel = "N", defaultValue = "20000",
+    @Option(names = "--sweeps", paramLabel = "N", defaultValue = "50000",
             description = "Sweeps for the raw and saturation phases (default: ${DEFAULT-VALUE}).")
     long sweeps;
 
