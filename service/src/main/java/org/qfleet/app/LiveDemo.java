@@ -119,7 +119,8 @@ final class LiveDemo implements RunCommand.WhileRunning {
         return console.processed() >= published ? 0 : 1;
     }
 
+    /** When the connector works loose: halfway through a given duration, else after 30 s. */
     private double halfway() {
-        return duration == null ? 60 : duration.toSeconds() / 2.0;
+        return duration == null ? 30 : duration.toSeconds() / 2.0;
     }
 }
