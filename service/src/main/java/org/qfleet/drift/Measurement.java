@@ -20,8 +20,12 @@ import java.util.Set;
 public record Measurement(String product, String lot, String station, String unit, long measuredAt,
         double qUnloaded, double f0Hz, double levelDb, List<String> flags) {
 
-    /** Flags that make Qu untrustworthy: such units are counted but kept out of the statistics. */
-    public static final Set<String> UNTRUSTED_FLAGS = Set.of("poor-fit", "low-snr", "multiple-resonances", "strong-coupling");
+    /**
+     * Flags that make Qu untrustworthy: such units are counted but kept out of the statistics. Not
+     * {@code strong-coupling}: a strongly coupled design gives a less precise Qu, not a wrong one,
+     * and excluding it would leave such a product unwatched.
+     */
+    public static final Set<String> UNTRUSTED_FLAGS = Set.of("poor-fit", "low-snr", "multiple-resonances");
 
     public Measurement {
         Objects.requireNonNull(product, "product");
