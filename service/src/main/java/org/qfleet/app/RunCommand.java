@@ -76,6 +76,7 @@ final class RunCommand implements Callable<Integer> {
         try {
             runner.start(config, catalogue, () -> stopRequested.getCount() == 0);
             err.println(runner.readyLine());
+            runner.endpointsLine().ifPresent(err::println);
             err.flush();
             if (whileRunning != null) {
                 return whileRunning.run(runner, stopRequested);

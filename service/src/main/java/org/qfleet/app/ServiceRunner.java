@@ -70,8 +70,6 @@ final class ServiceRunner implements AutoCloseable {
         settings = config.stream();
         if (config.httpAddress().isPresent()) {
             endpoints = ServiceEndpoints.start(config.httpAddress().get(), httpFallback, this::readiness);
-            err.println(prefix + endpoints.line());
-            err.flush();
         }
         if (config.embedded()) {
             try {
@@ -134,6 +132,15 @@ final class ServiceRunner implements AutoCloseable {
     Optional<HttpEndpoints> http() {
         ServiceEndpoints e = endpoints;
         return e == null ? Optional.empty() : Optional.of(e.http());
+    }
+
+    /**
+     * Where the status page, the metrics and the health checks are, to say after the ready line
+     * (before it, a line naming /health/ready could be taken for it); empty when they are off.
+     */
+    Optional<String> endpointsLine() {
+        ServiceEndpoints e = endpoints;
+        return e == null ? Optional.empty() : Optional.of(prefix + e.line());
     }
 
     /** Where the service reads and writes, for the ready line. */

@@ -54,6 +54,16 @@ public record StreamSettings(
      */
     static final int COMMIT_INTERVAL_MS = 100;
 
+    /**
+     * How long the group waits for a member that stopped heartbeating (Kafka's default is 45 s):
+     * after a crash or kill -9 the restarted instance gets its partitions back only once the dead
+     * member is dropped, so 15 s (heartbeats every 5 s, a third of it, as Kafka requires) brings a
+     * restarted service back within about 20 s. Heartbeats come from their own thread, so a busy
+     * stream thread does not miss them.
+     */
+    static final int SESSION_TIMEOUT_MS = 15_000;
+    static final int HEARTBEAT_INTERVAL_MS = 5_000;
+
     /** Settings read by the exception handlers from the Streams configuration. */
     static final String REJECTS_TOPIC_CONFIG = "qfleet.rejects.topic";
     static final String REJECT_PAYLOAD_CONFIG = "qfleet.rejects.payload.max.bytes";
@@ -106,7 +116,7 @@ public record StreamSettings(
     /**
      * The Kafka Streams configuration: exactly-once (v2), byte-array serdes, reading from the
      * earliest offset when the application id is new, bad records turned into rejects, a commit
-     * (transaction) every 100 ms, lz4 compression and larger batches and fetches for the producers
+     * (transaction) every 100 ms, a 15 s session timeout, lz4 compression and larger batches and fetches for the producers
      * and consumers of every topic (results, rejects, alerts, repartition and changelog topics:
      * JSON compresses several times); then the pass-through settings, which override any of these.
      */
@@ -119,6 +129,8 @@ public record StreamSettings(
         p.put(StreamsConfig.DEFAULT_KEY_SERDE_CLASS_CONFIG, Serdes.ByteArraySerde.class.getName());
         p.put(StreamsConfig.DEFAULT_VALUE_SERDE_CLASS_CONFIG, Serdes.ByteArraySerde.class.getName());
         p.put(StreamsConfig.consumerPrefix(ConsumerConfig.AUTO_OFFSET_RESET_CONFIG), "earliest");
+        p.put(StreamsConfig.consumerPrefix(ConsumerConfig.SESSION_TIMEOUT_MS_CONFIG), Integer.toString(SESSION_TIMEOUT_MS));
+        p.put(StreamsConfig.consumerPrefix(ConsumerConfig.HEARTBEAT_INTERVAL_MS_CONFIG), Integer.toString(HEARTBEAT_INTERVAL_MS));
         p.put(StreamsConfig.consumerPrefix(ConsumerConfig.MAX_PARTITION_FETCH_BYTES_CONFIG), Integer.toString(FETCH_PARTITION_BYTES));
         p.put(StreamsConfig.producerPrefix(ProducerConfig.COMPRESSION_TYPE_CONFIG), "lz4");
         p.put(StreamsConfig.producerPrefix(ProducerConfig.BATCH_SIZE_CONFIG), Integer.toString(PRODUCER_BATCH_BYTES));
