@@ -32,7 +32,7 @@ public final class ResonancePlot {
 
     /** The SVG document for one sweep and its result. */
     public String render(Sweep sweep, ResonanceResult result) {
-        SvgBuilder svg = new SvgBuilder(WIDTH, HEIGHT, STYLE);
+        SvgBuilder svg = SvgBuilder.standalone(WIDTH, HEIGHT, STYLE);
         svg.textTwoLines(20, 26, 20, "title", sweep.source(), titleNumbers(result));
         MainTrace main = MainTrace.of(sweep);
         if (main == null || sweep.size() == 0) {

@@ -1,19 +1,45 @@
 package org.qfleet.app.plot;
 
+import java.util.Map;
+
 /**
  * Writes SVG 1.1 markup by hand: a few element kinds, coordinates rounded to 0.01 px, text
  * escaped for XML. Elements with non-finite coordinates are left out rather than written broken.
+ * The plot files are standalone documents ({@link #standalone}); the status page's charts are
+ * elements inside its HTML ({@link #inline}).
  */
-final class SvgBuilder {
+public final class SvgBuilder {
 
     private final StringBuilder svg = new StringBuilder(64 * 1024);
 
-    SvgBuilder(int width, int height, String style) {
-        svg.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n")
+    private SvgBuilder() {
+    }
+
+    /** A standalone SVG document with its own style sheet and a white background. */
+    public static SvgBuilder standalone(int width, int height, String style) {
+        SvgBuilder b = new SvgBuilder();
+        b.svg.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n")
                 .append("<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"").append(width)
                 .append("\" height=\"").append(height).append("\" viewBox=\"0 0 ").append(width).append(' ')
                 .append(height).append("\">\n<style>").append(style).append("</style>\n")
                 .append("<rect width=\"100%\" height=\"100%\" fill=\"white\"/>\n");
+        return b;
+    }
+
+    /**
+     * An {@code svg} element to place inside an HTML page, styled by the page.
+     *
+     * @param attributes extra attributes of the {@code svg} element (values are escaped)
+     * @param label      what the chart shows, for its {@code title}
+     */
+    public static SvgBuilder inline(int width, int height, Map<String, String> attributes, String label) {
+        SvgBuilder b = new SvgBuilder();
+        b.svg.append("<svg xmlns=\"http://www.w3.org/2000/svg\"");
+        attributes.forEach((name, value) -> b.svg.append(' ').append(name).append("=\"").append(escape(value)).append('"'));
+        b.svg.append(" width=\"").append(width).append("\" height=\"").append(height).append("\" viewBox=\"0 0 ")
+                .append(width).append(' ').append(height).append("\" role=\"img\">\n<title>").append(escape(label))
+                .append("</title>\n");
+        return b;
     }
 
     SvgBuilder clipRect(String id, double x, double y, double w, double h) {
@@ -37,7 +63,7 @@ final class SvgBuilder {
         return this;
     }
 
-    SvgBuilder line(double x1, double y1, double x2, double y2, String cssClass) {
+    public SvgBuilder line(double x1, double y1, double x2, double y2, String cssClass) {
         if (finite(x1, y1, x2, y2)) {
             svg.append("<line class=\"").append(cssClass).append('"');
             attr("x1", x1).attr("y1", y1).attr("x2", x2).attr("y2", y2);
@@ -46,7 +72,7 @@ final class SvgBuilder {
         return this;
     }
 
-    SvgBuilder rect(double x, double y, double w, double h, String cssClass) {
+    public SvgBuilder rect(double x, double y, double w, double h, String cssClass) {
         if (finite(x, y, w, h)) {
             svg.append("<rect class=\"").append(cssClass).append('"');
             attr("x", x).attr("y", y).attr("width", w).attr("height", h);
@@ -55,7 +81,7 @@ final class SvgBuilder {
         return this;
     }
 
-    SvgBuilder circle(double cx, double cy, double r, String cssClass) {
+    public SvgBuilder circle(double cx, double cy, double r, String cssClass) {
         if (finite(cx, cy, r, 0)) {
             svg.append("<circle class=\"").append(cssClass).append('"');
             attr("cx", cx).attr("cy", cy).attr("r", r);
@@ -64,23 +90,31 @@ final class SvgBuilder {
         return this;
     }
 
-    /** A connected line through the points; non-finite points are skipped. */
-    SvgBuilder polyline(double[] xs, double[] ys, String cssClass) {
+    /** A connected line through the points; non-finite points are skipped, and with none left, the line. */
+    public SvgBuilder polyline(double[] xs, double[] ys, String cssClass) {
+        int start = svg.length();
         svg.append("<polyline class=\"").append(cssClass).append("\" points=\"");
+        int pointsStart = svg.length();
         for (int i = 0; i < xs.length; i++) {
             if (finite(xs[i], ys[i], 0, 0)) {
                 number(xs[i]).append(',');
                 number(ys[i]).append(' ');
             }
         }
+        if (svg.length() == pointsStart) {
+            svg.setLength(start);
+            return this;
+        }
         svg.append("\"/>\n");
         return this;
     }
 
-    SvgBuilder text(double x, double y, String anchor, String cssClass, String content) {
-        svg.append("<text class=\"").append(cssClass).append("\" text-anchor=\"").append(anchor).append('"');
-        attr("x", x).attr("y", y);
-        svg.append('>').append(escape(content)).append("</text>\n");
+    public SvgBuilder text(double x, double y, String anchor, String cssClass, String content) {
+        if (finite(x, y, 0, 0)) {
+            svg.append("<text class=\"").append(cssClass).append("\" text-anchor=\"").append(anchor).append('"');
+            attr("x", x).attr("y", y);
+            svg.append('>').append(escape(content)).append("</text>\n");
+        }
         return this;
     }
 
@@ -95,7 +129,7 @@ final class SvgBuilder {
     }
 
     /** Text turned 90 degrees counter-clockwise about its anchor, for vertical axis titles. */
-    SvgBuilder verticalText(double x, double y, String cssClass, String content) {
+    public SvgBuilder verticalText(double x, double y, String cssClass, String content) {
         svg.append("<text class=\"").append(cssClass).append("\" text-anchor=\"middle\" transform=\"rotate(-90 ");
         number(x).append(' ');
         number(y).append(")\"");
@@ -104,12 +138,15 @@ final class SvgBuilder {
         return this;
     }
 
-    String finish() {
+    public String finish() {
         return svg.append("</svg>\n").toString();
     }
 
-    /** Escapes XML markup characters and drops characters XML 1.0 does not allow. */
-    static String escape(String text) {
+    /** Escapes XML markup characters and drops characters XML 1.0 does not allow; null gives "". */
+    public static String escape(String text) {
+        if (text == null) {
+            return "";
+        }
         StringBuilder out = new StringBuilder(text.length() + 16);
         text.codePoints().forEach(c -> {
             switch (c) {

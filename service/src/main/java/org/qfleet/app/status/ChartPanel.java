@@ -1,5 +1,7 @@
 package org.qfleet.app.status;
 
+import org.qfleet.app.plot.SvgBuilder;
+
 /**
  * One plotting area of a chart: its place in the SVG, its axis ranges, and the mapping from data
  * to pixels; draws its frame, grid, ticks and axis titles.
@@ -22,7 +24,7 @@ record ChartPanel(double left, double top, double width, double height, NiceRang
         return top + height;
     }
 
-    void drawAxes(SvgWriter svg, String xTitle, String yTitle) {
+    void drawAxes(SvgBuilder svg, String xTitle, String yTitle) {
         svg.rect(left, top, width, height, "ch-area");
         for (double t : y.ticks()) {
             svg.line(left, py(t), right(), py(t), "ch-grid");

@@ -1,6 +1,7 @@
 package org.qfleet.app.status;
 
 import java.util.Locale;
+import org.qfleet.app.plot.SvgBuilder;
 
 /** Text and attribute values for the status page, which carries names that came from the network. */
 final class Html {
@@ -14,25 +15,7 @@ final class Html {
      * stays well-formed for HTML and XML parsers alike. Null gives the empty string.
      */
     static String escape(String text) {
-        if (text == null) {
-            return "";
-        }
-        StringBuilder out = new StringBuilder(text.length() + 16);
-        text.codePoints().forEach(c -> {
-            switch (c) {
-                case '&' -> out.append("&amp;");
-                case '<' -> out.append("&lt;");
-                case '>' -> out.append("&gt;");
-                case '"' -> out.append("&quot;");
-                case '\'' -> out.append("&#39;");
-                default -> {
-                    if (allowedInXml(c)) {
-                        out.appendCodePoint(c);
-                    }
-                }
-            }
-        });
-        return out.toString();
+        return SvgBuilder.escape(text);
     }
 
     /** A piece of an element id: letters, digits, {@code .}, {@code _} and {@code -} kept, anything else {@code _}. */
@@ -43,12 +26,5 @@ final class Html {
     /** A number for people: NaN and infinities as a dash, else {@code decimals} places. */
     static String number(double value, int decimals) {
         return Double.isFinite(value) ? String.format(Locale.ROOT, "%." + decimals + "f", value) : "\u2013";
-    }
-
-    private static boolean allowedInXml(int c) {
-        return c == 0x9 || c == 0xA || c == 0xD
-                || (c >= 0x20 && c <= 0xD7FF)
-                || (c >= 0xE000 && c <= 0xFFFD)
-                || (c >= 0x10000 && c <= 0x10FFFF);
     }
 }

@@ -1,16 +1,18 @@
 package org.qfleet.app.status;
 
+import org.qfleet.app.plot.SvgBuilder;
+
 /** A row of legend entries across the top of a chart: a short sample of each line and its name. */
 final class Legend {
 
     private static final double SAMPLE = 18;
     private static final double CHAR_WIDTH = 6.6;
 
-    private final SvgWriter svg;
+    private final SvgBuilder svg;
     private final double y;
     private double x;
 
-    Legend(SvgWriter svg, double x, double y) {
+    Legend(SvgBuilder svg, double x, double y) {
         this.svg = svg;
         this.x = x;
         this.y = y;

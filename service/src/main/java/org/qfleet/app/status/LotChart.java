@@ -1,5 +1,7 @@
 package org.qfleet.app.status;
 
+import org.qfleet.app.plot.SvgBuilder;
+
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -29,7 +31,7 @@ final class LotChart {
         attributes.put("class", "lot-chart" + (lot.closed() ? " closed-lot" : "") + (lot.highlighted() ? " alerted" : ""));
         attributes.put("data-product", lot.product());
         attributes.put("data-lot", lot.lot());
-        SvgWriter svg = new SvgWriter(WIDTH, HEIGHT, attributes,
+        SvgBuilder svg = SvgBuilder.inline(WIDTH, HEIGHT, attributes,
                 "Control chart of the mean Qu of lot " + lot.lot() + " of " + lot.product());
         List<LotPoint> points = lot.points();
         double[] xs = new double[points.size()];

@@ -1,5 +1,7 @@
 package org.qfleet.app.status;
 
+import org.qfleet.app.plot.SvgBuilder;
+
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -30,7 +32,7 @@ final class StationChart {
         attributes.put("class", station.alerted() ? "station-chart alerted" : "station-chart");
         attributes.put("data-product", station.product());
         attributes.put("data-station", station.station());
-        SvgWriter svg = new SvgWriter(WIDTH, HEIGHT, attributes,
+        SvgBuilder svg = SvgBuilder.inline(WIDTH, HEIGHT, attributes,
                 "EWMA and CUSUM charts of station " + station.station() + " for " + station.product());
         List<StationPoint> points = station.points();
         long maxUnits = Math.max(10, points.isEmpty() ? 0 : station.latest().units());
