@@ -96,8 +96,8 @@ public final class LotMonitor {
 
     private ProductState closeQuietLots(ProductState p, String current, LotStore lots, List<Alert> alerts) {
         long quiet = settings.quietPeriod().toMillis();
-        for (Map.Entry<String, Long> open : new TreeMap<>(p.openLots()).entrySet()) {
-            boolean quietInTime = p.latestEventTime() - open.getValue() > quiet;
+        for (Map.Entry<String, OpenLot> open : new TreeMap<>(p.openLots()).entrySet()) {
+            boolean quietInTime = p.latestEventTime() - open.getValue().lastEventTime() > quiet;
             boolean quietInUnits = settings.closeAfterUnits() > 0 && p.unitsSince(open.getKey()) >= settings.closeAfterUnits();
             if (open.getKey().equals(current) || !(quietInTime || quietInUnits)) {
                 continue;
