@@ -39,12 +39,16 @@ public record StationAlerts(String station, Map<String, List<Rule>> firing, Aler
         Set<Rule> union = EnumSet.noneOf(Rule.class);
         now.values().forEach(union::addAll);
         List<Rule> rules = new ArrayList<>(union);
-        Severity severity = rules.size() >= 2 ? Severity.CRITICAL : Severity.WARNING;
         AlertTracker t = tracker.open() == null
                 ? new AlertTracker(AlertKind.STATION, product, station, tracker.episodes(), null)
                 : tracker;
-        AlertTracker.Step step = t.observe(new Evidence(rules, severity, e.eventTime(), e.figures(), e.breakdown(), e.baseline()));
+        AlertTracker.Step step = t.observe(new Evidence(rules, severity(rules), e.eventTime(), e.figures(), e.breakdown(), e.baseline()));
         return new Step(new StationAlerts(station, now, step.tracker()), step);
+    }
+
+    /** Two or more rules firing at once make a station's alert critical. */
+    static Severity severity(List<Rule> rules) {
+        return rules.size() >= 2 ? Severity.CRITICAL : Severity.WARNING;
     }
 
     record Step(StationAlerts alerts, AlertTracker.Step tracked) {

@@ -126,7 +126,6 @@ public final class StationMonitor {
         if (s.exclusions().signalled()) {
             firing.add(Rule.STATION_EXCLUDED_SHARE);
         }
-        Severity severity = firing.size() >= 2 ? Severity.CRITICAL : Severity.WARNING;
         Map<String, Double> figures = new HashMap<>();
         figures.put("n", (double) s.qu().samples());
         figures.put("excluded", (double) s.excluded());
@@ -139,6 +138,6 @@ public final class StationMonitor {
         figures.put("couplingCusumLower", s.level().lower());
         figures.put("cusumLimit", s.f0().h());
         List<Breakdown> byLot = s.recentLots().stream().map(l -> new Breakdown(l.lot(), l.quDev().n(), l.quDev().mean())).toList();
-        return new Evidence(firing, severity, in.eventTime(), figures, byLot, in.baseline());
+        return new Evidence(firing, StationAlerts.severity(firing), in.eventTime(), figures, byLot, in.baseline());
     }
 }

@@ -77,7 +77,7 @@ final class JsonValues {
         if (token != JsonToken.VALUE_NUMBER_FLOAT && token != JsonToken.VALUE_NUMBER_INT) {
             throw wrongType(name, "a number");
         }
-        double value = parser.getDoubleValue();
+        double value = tokenValue();
         if (!Double.isFinite(value)) {
             throw nonFinite(name);
         }
