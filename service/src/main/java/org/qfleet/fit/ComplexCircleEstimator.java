@@ -18,6 +18,11 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
     static final double BACKGROUND_SIGNIFICANCE = 13.8;
     /** Points kept for the coarse solution of a long sweep. */
     private static final int COARSE_POINTS = 100;
+    /**
+     * A fit started from another trace's resonance is kept when its residual is within this factor of
+     * the noise; a trace it does not explain is fitted again from its own data.
+     */
+    private static final double UNEXPLAINED_RESIDUAL = 1.5;
     /** Coarse points per half width the resonance must keep. */
     private static final double COARSE_POINTS_PER_HALF_WIDTH = 4;
 
@@ -31,7 +36,30 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         if (!trace.phaseKnown()) {
             throw new FitException("the complex-circle fit needs phase, and this trace is magnitude only");
         }
-        CircleFit fit = fitCircle(frequencyHz, trace.re(), trace.im(), topology);
+        return traceFit(fitCircle(frequencyHz, trace.re(), trace.im(), topology, null));
+    }
+
+    /**
+     * Fits a trace of a resonance that another trace of the same sweep has already located, starting
+     * from that position and width instead of finding them in the data; when that start leaves the
+     * trace unexplained (it shows another resonance, or none), the fit starts over from the data alone.
+     */
+    TraceFit fitNear(double[] frequencyHz, Trace trace, Topology topology, ResonanceShape near) throws FitException {
+        if (!trace.phaseKnown()) {
+            throw new FitException("the complex-circle fit needs phase, and this trace is magnitude only");
+        }
+        try {
+            CircleFit fit = fitCircle(frequencyHz, trace.re(), trace.im(), topology, near);
+            if (fit.sigma() <= UNEXPLAINED_RESIDUAL * fit.noiseSigma()) {
+                return traceFit(fit);
+            }
+        } catch (FitException e) {
+            // started in the wrong place: start again from the data below
+        }
+        return traceFit(fitCircle(frequencyHz, trace.re(), trace.im(), topology, null));
+    }
+
+    private static TraceFit traceFit(CircleFit fit) {
         return new TraceFit(fit.parameters(), fit.covariance(), p -> ResonanceShape.of(fit.model(p)), fit.model(),
                 Method.COMPLEX_CIRCLE, fit.sigma(), fit.noiseSigma(), fit.residualPower());
     }
@@ -42,17 +70,18 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
      * and reflections always have one, and a magnitude tilt besides.
      */
     CircleFit fitCircle(double[] frequencyHz, double[] re, double[] im, Topology topology) throws FitException {
+        return fitCircle(frequencyHz, re, im, topology, null);
+    }
+
+    private CircleFit fitCircle(double[] frequencyHz, double[] re, double[] im, Topology topology, ResonanceShape near)
+            throws FitException {
         int n = frequencyHz.length;
         NormalizedFrequency normalized = NormalizedFrequency.of(frequencyHz);
         double referenceHz = normalized.referenceHz();
         double scaleHz = normalized.scaleHz();
         double[] x = normalized.x();
-        // Behind a large background (notch, reflection) a long delay spins the whole trace faster than
-        // the resonance moves along it: take the delay out first, from the background's phase slope.
-        double spin = topology == Topology.TRANSMISSION ? 0 : StartingPoint.backgroundDelay(x, re, im);
         double noise = NoiseEstimate.complexSigma(re, im);
-        double[] peak = spin == 0 ? StartingPoint.speedPeak(x, re, im, noise)
-                : StartingPoint.speedPeak(x, StartingPoint.rotated(x, re, im, spin), noise);
+        double[] peak = near != null ? normalizedPole(near, normalized) : modelFreePeak(x, re, im, topology, noise);
         double x0 = peak[0];
         double g = peak[1];
         double t = StartingPoint.delay(x, re, im, x0, g);
@@ -84,6 +113,22 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
             }
         }
         return toFit(s5, plain, n, referenceHz, scaleHz, noise);
+    }
+
+    /** Position and half width of the line from the data alone, as {x0, g}. */
+    private static double[] modelFreePeak(double[] x, double[] re, double[] im, Topology topology, double noise) {
+        // Behind a large background (notch, reflection) a long delay spins the whole trace faster than
+        // the resonance moves along it: take the delay out first, from the background's phase slope.
+        double spin = topology == Topology.TRANSMISSION ? 0 : StartingPoint.backgroundDelay(x, re, im);
+        return spin == 0 ? StartingPoint.speedPeak(x, re, im, noise)
+                : StartingPoint.speedPeak(x, StartingPoint.rotated(x, re, im, spin), noise);
+    }
+
+    /** The pole of a known resonance (the inverse of {@link ResonanceShape#fromPole}) in normalized units, as {x0, g}. */
+    private static double[] normalizedPole(ResonanceShape near, NormalizedFrequency normalized) {
+        double halfWidthHz = near.f0Hz() / (2 * near.qLoaded());
+        double centreHz = Math.sqrt(Math.max(0, near.f0Hz() * near.f0Hz() - halfWidthHz * halfWidthHz));
+        return new double[] {(centreHz - normalized.referenceHz()) / normalized.scaleHz(), halfWidthHz / normalized.scaleHz()};
     }
 
     /** Every k-th sample, so the coarse solution sees about {@link #COARSE_POINTS} points across the line. */

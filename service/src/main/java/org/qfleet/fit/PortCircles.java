@@ -13,28 +13,21 @@ import org.qfleet.sweep.Trace;
  */
 final class PortCircles {
 
-    /** Fits one trace with a given topology and method. */
-    @FunctionalInterface
-    interface TraceFitter {
-        TraceFit fit(double[] frequencyHz, Trace trace, Topology topology, Method method) throws FitException;
-    }
+    private final ComplexCircleEstimator circles = new ComplexCircleEstimator();
 
-    private final TraceFitter estimator;
-
-    PortCircles(TraceFitter estimator) {
-        this.estimator = estimator;
-    }
-
-    /** S11 and S22 circles when both are there with phase and show a resonance; empty otherwise. */
-    Optional<List<TraceFit>> fit(Sweep sweep) {
+    /**
+     * S11 and S22 circles when both are there with phase and show a resonance; empty otherwise. The
+     * fits start from the resonance the main trace found ({@code near}), which the reflections share.
+     */
+    Optional<List<TraceFit>> fit(Sweep sweep, ResonanceShape near) {
         Optional<Trace> s11 = sweep.trace(SParameter.S11);
         Optional<Trace> s22 = sweep.trace(SParameter.S22);
         if (s11.isEmpty() || s22.isEmpty() || !s11.get().phaseKnown() || !s22.get().phaseKnown()) {
             return Optional.empty();
         }
         try {
-            TraceFit f11 = estimator.fit(sweep.frequencyHz(), s11.get(), Topology.REFLECTION, Method.COMPLEX_CIRCLE);
-            TraceFit f22 = estimator.fit(sweep.frequencyHz(), s22.get(), Topology.REFLECTION, Method.COMPLEX_CIRCLE);
+            TraceFit f11 = circles.fitNear(sweep.frequencyHz(), s11.get(), Topology.REFLECTION, near);
+            TraceFit f22 = circles.fitNear(sweep.frequencyHz(), s22.get(), Topology.REFLECTION, near);
             if (!usable(f11) || !usable(f22)) {
                 return Optional.empty();
             }

@@ -52,7 +52,7 @@ public final class ResonanceAnalyzer {
         };
         Set<QualityFlag> extraFlags = EnumSet.noneOf(QualityFlag.class);
         if (topology == Topology.TRANSMISSION && options.method() != Method.HALF_POWER) {
-            Optional<List<TraceFit>> ports = portCircles.fit(sweep);
+            Optional<List<TraceFit>> ports = portCircles.fit(sweep, mainFit.shape());
             if (ports.isPresent() && PortCircles.showSameResonance(mainFit, ports.get())) {
                 fits.addAll(ports.get());
                 route = CouplingRoute.TRANSMISSION_PORTS;
@@ -64,9 +64,9 @@ public final class ResonanceAnalyzer {
         return ResultAssembly.assemble(sweep.frequencyHz(), fits, route, extraFlags);
     }
 
-    private final PortCircles portCircles = new PortCircles(this::fitTrace);
+    private final PortCircles portCircles = new PortCircles();
 
-    TraceFit fitTrace(double[] f, Trace trace, Topology topology, Method method) throws FitException {
+    private TraceFit fitTrace(double[] f, Trace trace, Topology topology, Method method) throws FitException {
         Method chosen = method != null ? method : trace.phaseKnown() ? Method.COMPLEX_CIRCLE : Method.LORENTZIAN;
         return estimators.get(chosen).fit(f, trace, topology);
     }

@@ -25,7 +25,7 @@ final class Select {
         int lo = 0;
         int hi = length - 1;
         while (lo < hi) {
-            double pivot = v[(lo + hi) >>> 1];
+            double pivot = medianOfThree(v[lo], v[(lo + hi) >>> 1], v[hi]);
             int i = lo;
             int j = hi;
             while (i <= j) {
@@ -52,5 +52,14 @@ final class Select {
             }
         }
         return v[k];
+    }
+
+    /**
+     * The middle one of three values: a pivot that stays near the median on sorted or peaked data
+     * (a smoothed resonance line has its largest value in the middle), where the middle element alone
+     * makes the selection quadratic.
+     */
+    private static double medianOfThree(double a, double b, double c) {
+        return Math.max(Math.min(a, b), Math.min(Math.max(a, b), c));
     }
 }

@@ -22,11 +22,11 @@ final class StartingPoint {
         // Difference over a baseline of 2m points, m doubled until the largest step stands well out of
         // the noise (|dz| of pure noise averages 1.8 sigma): long baselines see through noise, short ones resolve narrow lines.
         int m = 1;
-        double[] d = differences(re, im, m);
-        while (4 * m < n / 4 && max(d) < 12 * noise) {
+        double threshold = 12 * noise;
+        while (4 * m < n / 4 && largestSquaredStep(re, im, m) < threshold * threshold) {
             m *= 2;
-            d = differences(re, im, m);
         }
+        double[] d = differences(re, im, m);
         double[] v = new double[n];
         for (int i = m; i < n - m; i++) {
             v[i] = d[i] / (x[i + m] - x[i - m]);
@@ -81,12 +81,15 @@ final class StartingPoint {
         return d;
     }
 
-    private static double max(double[] v) {
-        double m = 0;
-        for (double e : v) {
-            m = Math.max(m, e);
+    /** The largest |z[i + m] - z[i - m]|^2, compared squared so that no root is taken. */
+    private static double largestSquaredStep(double[] re, double[] im, int m) {
+        double largest = 0;
+        for (int i = m; i < re.length - m; i++) {
+            double a = re[i + m] - re[i - m];
+            double b = im[i + m] - im[i - m];
+            largest = Math.max(largest, a * a + b * b);
         }
-        return m;
+        return largest;
     }
 
     private static double crossing(double[] x, double[] s, int k, int direction, double level) {
