@@ -23,6 +23,9 @@ final class CircleProblem implements LeastSquaresProblem {
     private final double[][] scoreJtj = new double[7][7];
     private final double[] scoreJtr = new double[7];
     private final double[] scoredAt = new double[5];
+    /** |r|^2 at every point from the last pass with normal equations, and the parameters of that pass. */
+    private final double[] lastPower;
+    private double[] lastPowerAt = new double[0];
 
     CircleProblem(double[] x, double[] zr, double[] zi, boolean background, boolean tilt) {
         this.x = x;
@@ -33,6 +36,7 @@ final class CircleProblem implements LeastSquaresProblem {
         this.equallySpaced = Phasors.equallySpaced(x);
         java.util.Arrays.fill(scoredAt, Double.NaN);
         this.gain = new double[x.length];
+        this.lastPower = new double[x.length];
         this.cos = new double[x.length];
         this.sin = new double[x.length];
     }
@@ -77,6 +81,7 @@ final class CircleProblem implements LeastSquaresProblem {
         double[][] jtj8 = new double[8][8];
         double[] jtr8 = new double[8];
         double cost = tiltKernel(p8, jtj8, jtr8);
+        lastPowerAt = p.clone();
         for (int i = 0; i < 7; i++) {
             System.arraycopy(jtj8[i], i, jtj[i], i, 7 - i);
             jtr[i] = jtr8[i];
@@ -88,8 +93,14 @@ final class CircleProblem implements LeastSquaresProblem {
         return residuals(p, null);
     }
 
-    /** |r|^2 at every point for parameters p, for the residual checks. */
+    /**
+     * |r|^2 at every point for parameters p, for the residual checks: kept from the last pass when it
+     * was made at p (the optimizer's last pass normally is), else one more pass.
+     */
     double[] residualPower(double[] p) {
+        if (java.util.Arrays.equals(p, lastPowerAt)) {
+            return lastPower.clone();
+        }
         double[] out = new double[x.length];
         residuals(p, out);
         return out;
@@ -180,7 +191,9 @@ final class CircleProblem implements LeastSquaresProblem {
             double li = -g * u * iq;
             double rr = wr - (ar * lr - ai * li);
             double ri = wi - (ar * li + ai * lr);
-            cost += rr * rr + ri * ri;
+            double r2 = rr * rr + ri * ri;
+            lastPower[k] = r2;
+            cost += r2;
             s0 += iq;
             v1 += u * iq;
             t0 += iq2;
@@ -212,6 +225,7 @@ final class CircleProblem implements LeastSquaresProblem {
             c3r += u * qr;
             c3i += u * qi;
         }
+        lastPowerAt = p.clone();
         double a2 = ar * ar + ai * ai;
         // K1 = sum (g - j u) / |D|^4, Kg = sum u (g - j u) / |D|^4.
         double k1r = g * t0;
@@ -323,7 +337,9 @@ final class CircleProblem implements LeastSquaresProblem {
             double mi = k * bi + ar * kli + ai * klr;
             double rr = wr - mr;
             double ri = wi - mi;
-            cost += rr * rr + ri * ri;
+            double r2 = rr * rr + ri * ri;
+            lastPower[i] = r2;
+            cost += r2;
             double xmr = xk * mr;
             double xmi = xk * mi;
             // q = k A / D^2, with 1 / D^2 = (g^2 - u^2 - 2 j g u) / |D|^4
@@ -373,6 +389,7 @@ final class CircleProblem implements LeastSquaresProblem {
             mrR += xmr * rr + xmi * ri;
             mrI += xmr * ri - xmi * rr;
         }
+        lastPowerAt = p.clone();
         double[] r0 = jtj[0];
         double[] r1 = jtj[1];
         double[] r2 = jtj[2];

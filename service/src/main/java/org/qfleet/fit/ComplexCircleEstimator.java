@@ -23,6 +23,11 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
      * the noise; a trace it does not explain is fitted again from its own data.
      */
     private static final double UNEXPLAINED_RESIDUAL = 1.5;
+    /**
+     * The coarse solution stops at steps of about a tenth of its standard deviation: the full data
+     * move it by about one anyway.
+     */
+    private static final double COARSE_VARIANCE_FRACTION = 1e-2;
     /** Coarse points per half width the resonance must keep. */
     private static final double COARSE_POINTS_PER_HALF_WIDTH = 4;
 
@@ -150,7 +155,7 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
     }
 
     private static double[] coarse(CircleProblem problem, double[] start, int stride) {
-        return stride == 1 ? start : LevenbergMarquardt.solve(problem, start).p();
+        return stride == 1 ? start : LevenbergMarquardt.solve(problem, start, COARSE_VARIANCE_FRACTION).p();
     }
 
     private static CircleFit solve(CircleProblem problem, double[] start, int n, double referenceHz, double scaleHz,

@@ -22,6 +22,14 @@ final class LevenbergMarquardt {
     }
 
     static Solution solve(LeastSquaresProblem problem, double[] start) {
+        return solve(problem, start, VARIANCE_FRACTION);
+    }
+
+    /**
+     * The same with another stopping fraction of the residual variance: a solution that only starts a
+     * finer one may stop when its steps fall to about a tenth of a standard deviation (1e-2).
+     */
+    static Solution solve(LeastSquaresProblem problem, double[] start, double varianceFraction) {
         int n = problem.parameterCount();
         int dof = Math.max(1, problem.residualCount() - n);
         double[] p = start.clone();
@@ -54,7 +62,7 @@ final class LevenbergMarquardt {
                 trial[i] = p[i] + step[i];
                 predicted += step[i] * jtr[i];
             }
-            if (predicted <= VARIANCE_FRACTION * cost / dof) {
+            if (predicted <= varianceFraction * cost / dof) {
                 // Even the full step would gain next to nothing (the Gauss-Newton model predicts
                 // about twice the actual drop near a minimum): stop without evaluating it.
                 converged = true;
@@ -74,7 +82,7 @@ final class LevenbergMarquardt {
                 trialJtr = swapJtr;
                 cost = trialCost;
                 lambda = Math.max(lambda / 10, 1e-12);
-                converged = drop <= VARIANCE_FRACTION * cost / dof;
+                converged = drop <= varianceFraction * cost / dof;
             } else {
                 lambda *= 10;
                 // No downhill step left at any damping: the current point is the minimum to working precision.

@@ -3,6 +3,8 @@ package org.qfleet.fit;
 /** Fills exp(-j t x_i) for a set of abscissae, by rotation when they are equally spaced. */
 final class Phasors {
 
+    private static final int CHAINS = 4;
+
     private Phasors() {
     }
 
@@ -35,33 +37,47 @@ final class Phasors {
             return;
         }
         double step = (x[n - 1] - x[0]) / (n - 1);
-        // Two interleaved rotations by twice the step halve the chain of dependent multiplications;
-        // both restart from the library functions every 64 points so rounding cannot accumulate.
-        double rc = Math.cos(2 * t * step);
-        double rs = -Math.sin(2 * t * step);
-        double ca = 0;
-        double sa = 0;
-        double cb = 0;
-        double sb = 0;
-        for (int i = 0; i < n; i += 2) {
-            if ((i & 63) == 0) {
-                ca = Math.cos(t * (x[0] + i * step));
-                sa = -Math.sin(t * (x[0] + i * step));
-                cb = Math.cos(t * (x[0] + (i + 1) * step));
-                sb = -Math.sin(t * (x[0] + (i + 1) * step));
-            }
-            cos[i] = ca;
-            sin[i] = sa;
-            if (i + 1 < n) {
-                cos[i + 1] = cb;
-                sin[i + 1] = sb;
-            }
-            double na = ca * rc - sa * rs;
-            sa = ca * rs + sa * rc;
-            ca = na;
-            double nb = cb * rc - sb * rs;
-            sb = cb * rs + sb * rc;
-            cb = nb;
+        // Four interleaved chains, each turned by four steps per point it fills: the multiplications of
+        // one chain wait on each other, those of different chains do not. Rounding grows by about one
+        // unit in the last place per step (1e-13 after a few thousand points), far below any data.
+        double rc = Math.cos(CHAINS * t * step);
+        double rs = -Math.sin(CHAINS * t * step);
+        double c0 = Math.cos(t * x[0]);
+        double s0 = -Math.sin(t * x[0]);
+        double c1 = Math.cos(t * (x[0] + step));
+        double s1 = -Math.sin(t * (x[0] + step));
+        double c2 = Math.cos(t * (x[0] + 2 * step));
+        double s2 = -Math.sin(t * (x[0] + 2 * step));
+        double c3 = Math.cos(t * (x[0] + 3 * step));
+        double s3 = -Math.sin(t * (x[0] + 3 * step));
+        int i = 0;
+        for (; i + CHAINS <= n; i += CHAINS) {
+            cos[i] = c0;
+            sin[i] = s0;
+            cos[i + 1] = c1;
+            sin[i + 1] = s1;
+            cos[i + 2] = c2;
+            sin[i + 2] = s2;
+            cos[i + 3] = c3;
+            sin[i + 3] = s3;
+            double n0 = c0 * rc - s0 * rs;
+            s0 = c0 * rs + s0 * rc;
+            c0 = n0;
+            double n1 = c1 * rc - s1 * rs;
+            s1 = c1 * rs + s1 * rc;
+            c1 = n1;
+            double n2 = c2 * rc - s2 * rs;
+            s2 = c2 * rs + s2 * rc;
+            c2 = n2;
+            double n3 = c3 * rc - s3 * rs;
+            s3 = c3 * rs + s3 * rc;
+            c3 = n3;
+        }
+        double[] tailCos = {c0, c1, c2};
+        double[] tailSin = {s0, s1, s2};
+        for (int j = 0; i < n; i++, j++) {
+            cos[i] = tailCos[j];
+            sin[i] = tailSin[j];
         }
     }
 

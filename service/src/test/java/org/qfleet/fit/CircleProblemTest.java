@@ -74,6 +74,13 @@ class CircleProblemTest {
         }
         assertThat(cost).isCloseTo(expectedCost, within(1e-9 * expectedCost));
         assertThat(problem.cost(p)).isCloseTo(expectedCost, within(1e-9 * expectedCost));
+        // the per-point residuals kept from the pass agree with a fresh evaluation, and only at that point
+        double[] fresh = new CircleProblem(x, zr, zi, background, tilt).residualPower(p);
+        assertThat(problem.residualPower(p)).containsExactly(fresh, within(1e-12));
+        double[] moved = p.clone();
+        moved[n - 1] += 0.01;
+        assertThat(problem.residualPower(moved)).containsExactly(
+                new CircleProblem(x, zr, zi, background, tilt).residualPower(moved), within(1e-12));
         for (int a = 0; a < n; a++) {
             double g = 0;
             for (int k = 0; k < 2 * N; k++) {
