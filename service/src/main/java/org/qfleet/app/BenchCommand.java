@@ -76,6 +76,11 @@ final class BenchCommand implements Callable<Integer> {
             description = "Sweeps for the raw and saturation phases (default: ${DEFAULT-VALUE}).")
     long sweeps;
 
+    @Option(names = "--warm-up", paramLabel = "N", defaultValue = "10000",
+            description = "Sweeps published, read and worked through once, unmeasured, before the measured phases, "
+                    + "so that the JIT has compiled the clients, the broker and the service; 0 for none (default: ${DEFAULT-VALUE}).")
+    long warmUp;
+
     @Option(names = "--rate", paramLabel = "PER_SECOND", defaultValue = "200",
             description = "Offered rate of the latency phase (default: ${DEFAULT-VALUE}).")
     double rate;
@@ -209,6 +214,9 @@ final class BenchCommand implements Callable<Integer> {
         if (sweeps < 1 || sweeps > MAX_SWEEPS) {
             throw usage("--sweeps must lie between 1 and " + MAX_SWEEPS + ", got " + sweeps);
         }
+        if (warmUp < 0 || warmUp > MAX_SWEEPS) {
+            throw usage("--warm-up must lie between 0 and " + MAX_SWEEPS + ", got " + warmUp);
+        }
         if (!(rate > 0) || Double.isInfinite(rate)) {
             throw usage("--rate must be a positive number of sweeps per second, got " + rate);
         }
@@ -231,7 +239,7 @@ final class BenchCommand implements Callable<Integer> {
         }
         int distinct = (int) Math.min(sweeps, Math.max(16, (long) DISTINCT_AT_401 * 401 / Math.max(points, 401)));
         Optional<Short> replication = bootstrapServers == null ? Optional.of((short) 1) : Optional.empty();
-        return new BenchRun.Plan(bootstrapServers == null ? "embedded" : bootstrapServers, settings, replication, sweeps, points,
+        return new BenchRun.Plan(bootstrapServers == null ? "embedded" : bootstrapServers, settings, replication, sweeps, warmUp, points,
                 distinct, forms, topicPartitions, threads, rate, rateDuration, lateAfter, stallTimeout, skipRaw, skipLatency, seed);
     }
 
@@ -288,7 +296,7 @@ final class BenchCommand implements Callable<Integer> {
     private static void deleteTopics(Map<String, String> settings, BenchRun run, PrintWriter err) {
         try (Admin admin = Admin.create(Map.copyOf(settings))) {
             List<String> ours = admin.listTopics().names().get(REACH_TIMEOUT.toMillis(), TimeUnit.MILLISECONDS).stream()
-                    .filter(t -> run.topics().all().contains(t) || t.startsWith(run.applicationId() + "-")).toList();
+                    .filter(run::owns).toList();
             admin.deleteTopics(ours).all().get(REACH_TIMEOUT.toMillis(), TimeUnit.MILLISECONDS);
         } catch (ExecutionException | TimeoutException | KafkaException e) {
             say(err, "could not delete the run's topics (" + BenchException.reason(e) + "); they start with qfleet-bench-");

@@ -68,7 +68,7 @@ record BenchFigures(String startedAt, Machine machine, Settings settings, List<P
      * @param offeredSeconds   how long the latency phase publishes
      * @param lateAfterMillis  results slower than this count as late
      */
-    record Settings(String broker, long sweeps, int points, int distinctSweeps, double meanMessageBytes, List<String> forms,
+    record Settings(String broker, long sweeps, long warmUpSweeps, int points, int distinctSweeps, double meanMessageBytes, List<String> forms,
             int partitions, int threads, double offeredPerSecond, double offeredSeconds, double lateAfterMillis) {
 
         Settings {

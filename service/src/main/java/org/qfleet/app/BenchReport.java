@@ -39,8 +39,9 @@ final class BenchReport {
             }
         }
         BenchFigures.Settings s = f.settings();
-        lines.add(String.format(Locale.ROOT, "settings: broker %s, %d points, %d partitions, %d stream threads, %d distinct sweeps of %.0f bytes",
-                s.broker(), s.points(), s.partitions(), s.threads(), s.distinctSweeps(), s.meanMessageBytes()));
+        lines.add(String.format(Locale.ROOT, "settings: broker %s, %d points, %d partitions, %d stream threads, %d distinct sweeps of %.0f bytes, "
+                + "%d warm-up sweeps", s.broker(), s.points(), s.partitions(), s.threads(), s.distinctSweeps(), s.meanMessageBytes(),
+                s.warmUpSweeps()));
         BenchFigures.Machine m = f.machine();
         lines.add(String.format(Locale.ROOT, "machine: %d cores (%s), %s, %s, heap bound %.0f MB, load average %s at the end",
                 m.cores(), m.cpuModel(), m.jvm(), m.os(), m.maxHeapBytes() / MB, m.loadAverage() >= 0 ? number(m.loadAverage()) : "unknown"));
@@ -79,6 +80,7 @@ final class BenchReport {
         ObjectNode settings = root.putObject("settings");
         settings.put("broker", s.broker());
         settings.put("sweeps", s.sweeps());
+        settings.put("warmUpSweeps", s.warmUpSweeps());
         settings.put("points", s.points());
         settings.put("distinctSweeps", s.distinctSweeps());
         settings.put("meanMessageBytes", Math.round(s.meanMessageBytes()));

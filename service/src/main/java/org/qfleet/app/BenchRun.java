@@ -47,8 +47,8 @@ final class BenchRun {
      * @param replication  replication factor of the topics, or empty for the broker's default
      * @param stallTimeout give up on a phase when nothing has come for this long
      */
-    record Plan(String broker, Map<String, String> kafka, Optional<Short> replication, long sweeps, int points,
-            int distinct, List<TraceForm> forms, int partitions, int threads, double rate, Duration rateDuration,
+    record Plan(String broker, Map<String, String> kafka, Optional<Short> replication, long sweeps, long warmUpSweeps,
+            int points, int distinct, List<TraceForm> forms, int partitions, int threads, double rate, Duration rateDuration,
             Duration lateAfter, Duration stallTimeout, boolean skipRaw, boolean skipLatency, long seed) {
     }
 
@@ -69,8 +69,7 @@ final class BenchRun {
 
     /** The run's topics: unique names, so runs on the same cluster never mix. */
     Topics topics() {
-        String prefix = "qfleet-bench-" + runTag + ".";
-        return new Topics(prefix + "sweeps", prefix + "results", prefix + "rejects", prefix + "alerts");
+        return topics(applicationId());
     }
 
     /** The run's Kafka Streams application id, new for every run. */
@@ -78,22 +77,40 @@ final class BenchRun {
         return "qfleet-bench-" + runTag;
     }
 
+    /**
+     * Whether a topic belongs to this run: its own topics, the warm-up's, and the internal topics of
+     * both applications all start with the application id and a dot or a dash.
+     */
+    boolean owns(String topic) {
+        return topic.startsWith(applicationId() + ".") || topic.startsWith(applicationId() + "-");
+    }
+
+    private static Topics topics(String prefix) {
+        return new Topics(prefix + ".sweeps", prefix + ".results", prefix + ".rejects", prefix + ".alerts");
+    }
+
+    private StreamSettings serviceSettings(Topics topics, String applicationId) {
+        return new StreamSettings(topics, applicationId, plan.threads(), SweepLimits.DEFAULT,
+                StreamSettings.DEFAULT_MAX_SWEEP_BYTES, StreamSettings.DEFAULT_MAX_REJECT_PAYLOAD_BYTES, plan.kafka());
+    }
+
     BenchFigures run() throws BenchException, InterruptedException {
         String startedAt = Instant.now().toString();
         Topics topics = topics();
-        StreamSettings service = new StreamSettings(topics, applicationId(), plan.threads(),
-                SweepLimits.DEFAULT, StreamSettings.DEFAULT_MAX_SWEEP_BYTES,
-                StreamSettings.DEFAULT_MAX_REJECT_PAYLOAD_BYTES, plan.kafka());
+        StreamSettings service = serviceSettings(topics, applicationId());
         say(String.format(Locale.ROOT, "simulating %d distinct sweeps of %d points", plan.distinct(), plan.points()));
         BenchSweeps sweeps = BenchSweeps.generate(plan.distinct(), plan.points(), plan.forms(), plan.seed(), runTag);
         warmUp(sweeps, service);
+        if (plan.warmUpSweeps() > 0) {
+            rehearse(sweeps);
+        }
         createTopics(topics);
         long offered = plan.skipLatency() ? 0 : Math.max(1, Math.round(plan.rate() * plan.rateDuration().toNanos() / 1e9));
         List<BenchFigures.Phase> phases = new ArrayList<>();
-        phases.add(publish(sweeps, topics));
+        phases.add(publish(BenchFigures.PUBLISH, sweeps, topics, plan.sweeps()));
         checkStop();
         if (!plan.skipRaw()) {
-            phases.add(raw(topics));
+            phases.add(raw(BenchFigures.RAW, topics, plan.sweeps()));
             checkStop();
         }
         try (BenchResultWatcher watcher = new BenchResultWatcher(clients, topics.results(), topics.rejects(), sweeps,
@@ -106,7 +123,7 @@ final class BenchRun {
                 long start = System.nanoTime();
                 say("starting the service (application id " + applicationId() + ", " + plan.threads() + " stream threads)");
                 running = StreamService.start(service, ProductCatalogue.demoPlant());
-                phases.add(saturation(watcher, running, start));
+                phases.add(saturation(BenchFigures.SERVICE, watcher, running, start, plan.sweeps()));
                 if (!plan.skipLatency() && !stop.getAsBoolean() && !running.hasFailed()) {
                     phases.add(latency(sweeps, topics, watcher, running, offered));
                 }
@@ -124,7 +141,7 @@ final class BenchRun {
         }
         checkStop();
         return new BenchFigures(startedAt, BenchMachine.describe(),
-                new BenchFigures.Settings(plan.broker(), plan.sweeps(), plan.points(), sweeps.distinct(), sweeps.meanMessageBytes(),
+                new BenchFigures.Settings(plan.broker(), plan.sweeps(), plan.warmUpSweeps(), plan.points(), sweeps.distinct(), sweeps.meanMessageBytes(),
                         plan.forms().stream().map(TraceForm::code).toList(), plan.partitions(), plan.threads(), plan.rate(),
                         plan.rateDuration().toNanos() / 1e9, plan.lateAfter().toNanos() / 1e6),
                 phases);
@@ -145,6 +162,45 @@ final class BenchRun {
         }
     }
 
+    /**
+     * The publish, raw and service phases once through, unmeasured, on {@link Plan#warmUpSweeps} sweeps
+     * in topics of their own with an application of its own: the JIT compiles the paths of the
+     * clients, the broker and Kafka Streams (far more code than the fit and the decoder) before
+     * anything is timed, so the figures are those of a service that has been running for a while.
+     */
+    private void rehearse(BenchSweeps sweeps) throws BenchException, InterruptedException {
+        String applicationId = applicationId() + "-warm-up";
+        Topics topics = topics(applicationId);
+        long n = plan.warmUpSweeps();
+        say("warming up on " + n + " sweeps in topics of their own (not measured)");
+        createTopics(topics);
+        publish("warm-up publish", sweeps, topics, n);
+        checkStop();
+        if (!plan.skipRaw()) {
+            raw("warm-up raw", topics, n);
+            checkStop();
+        }
+        try (BenchResultWatcher watcher = new BenchResultWatcher(clients, topics.results(), topics.rejects(), sweeps,
+                Math.toIntExact(n))) {
+            Thread reader = new Thread(watcher, "qfleet-bench-warm-up-results");
+            reader.setDaemon(true);
+            reader.start();
+            StreamService running = StreamService.start(serviceSettings(topics, applicationId), ProductCatalogue.demoPlant());
+            try {
+                saturation("warm-up service", watcher, running, System.nanoTime(), n);
+            } finally {
+                progress.end();
+                running.close(SERVICE_CLOSE_TIMEOUT);
+                watcher.close();
+                reader.join(10_000);
+            }
+            if (running.hasFailed()) {
+                throw new BenchException("the service stopped after an error while warming up; see the log above");
+            }
+        }
+        checkStop();
+    }
+
     private void createTopics(Topics topics) throws BenchException, InterruptedException {
         try (Admin admin = Admin.create(clients)) {
             new TopicSetup(Map.of(topics.rejects(), 1, topics.alerts(), 1), plan.partitions(), plan.replication())
@@ -155,7 +211,8 @@ final class BenchRun {
         say("topics " + topics.sweeps() + " and " + topics.results() + " with " + plan.partitions() + " partitions");
     }
 
-    private BenchFigures.Phase publish(BenchSweeps sweeps, Topics topics) throws BenchException, InterruptedException {
+    private BenchFigures.Phase publish(String name, BenchSweeps sweeps, Topics topics, long count)
+            throws BenchException, InterruptedException {
         PhaseMeter meter = PhaseMeter.start();
         long start = System.nanoTime();
         // Large batches: a sweep message is bigger than the producer's default batch of 16 KiB.
@@ -164,9 +221,9 @@ final class BenchRun {
         bulk.put(ProducerConfig.LINGER_MS_CONFIG, "20");
         bulk.putAll(clients);
         SweepPublisher publisher = new SweepPublisher(bulk, topics.sweeps(), sweeps::message);
-        progress.begin(BenchFigures.PUBLISH, plan.sweeps(), publisher::acknowledged, meter);
+        progress.begin(name, count, publisher::acknowledged, meter);
         try (publisher) {
-            publisher.publish(plan.sweeps(), 0, stop);
+            publisher.publish(count, 0, stop);
         }
         double seconds = (System.nanoTime() - start) / 1e9;
         progress.end();
@@ -175,46 +232,45 @@ final class BenchRun {
                     + BenchException.reason(publisher.failure()));
         }
         checkStop();
-        if (publisher.acknowledged() != plan.sweeps()) {
-            throw new BenchException("the broker acknowledged " + publisher.acknowledged() + " of " + plan.sweeps() + " sweeps");
+        if (publisher.acknowledged() != count) {
+            throw new BenchException("the broker acknowledged " + publisher.acknowledged() + " of " + count + " sweeps");
         }
-        BenchFigures.Phase phase = new BenchFigures.Phase(BenchFigures.PUBLISH, plan.sweeps(), seconds, plan.sweeps() / seconds,
+        BenchFigures.Phase phase = new BenchFigures.Phase(name, count, seconds, count / seconds,
                 meter.finish(), null, null, null, null);
         sayDone(phase);
         return phase;
     }
 
-    private BenchFigures.Phase raw(Topics topics) throws BenchException {
+    private BenchFigures.Phase raw(String name, Topics topics, long count) throws BenchException {
         PhaseMeter meter = PhaseMeter.start();
         RawCeiling ceiling = new RawCeiling(clients, topics.sweeps(), SweepLimits.DEFAULT);
-        progress.begin(BenchFigures.RAW, plan.sweeps(), ceiling::read, meter);
-        RawCeiling.Result r = ceiling.run(plan.sweeps(), plan.stallTimeout(), stop);
+        progress.begin(name, count, ceiling::read, meter);
+        RawCeiling.Result r = ceiling.run(count, plan.stallTimeout(), stop);
         progress.end();
-        if (r.read() < plan.sweeps() && !stop.getAsBoolean()) {
-            throw new BenchException("the raw consumer read " + r.read() + " of " + plan.sweeps() + " sweeps, then nothing for "
+        if (r.read() < count && !stop.getAsBoolean()) {
+            throw new BenchException("the raw consumer read " + r.read() + " of " + count + " sweeps, then nothing for "
                     + plan.stallTimeout().toSeconds() + " s");
         }
         Span span = Span.of(r.read(), r.firstBatch(), r.startNanos(), r.firstNanos(), r.lastNanos());
-        BenchFigures.Phase phase = new BenchFigures.Phase(BenchFigures.RAW, r.read(), span.seconds(), span.rate(),
+        BenchFigures.Phase phase = new BenchFigures.Phase(name, r.read(), span.seconds(), span.rate(),
                 meter.finish(), r.decodeFailures(), null, null, null);
         sayDone(phase);
         return phase;
     }
 
-    private BenchFigures.Phase saturation(BenchResultWatcher watcher, StreamService running, long start)
+    private BenchFigures.Phase saturation(String name, BenchResultWatcher watcher, StreamService running, long start, long n)
             throws InterruptedException {
-        long n = plan.sweeps();
         // CPU and heap from the first result on: the service's start-up (joining the group, setting
         // up transactions) is reported as startSeconds, not averaged into the steady work.
         awaitFirst(watcher, running);
         PhaseMeter meter = PhaseMeter.start();
-        progress.begin(BenchFigures.SERVICE, n, () -> watcher.accounted(0, n), meter);
+        progress.begin(name, n, () -> watcher.accounted(0, n), meter);
         awaitAccounted(watcher, running, 0, n);
         progress.end();
         BenchResultWatcher.Snapshot s = watcher.snapshot();
         long out = s.results() + s.rejects();
         Span span = Span.of(out, s.firstBatch(), start, s.firstNanos(), s.lastNanos());
-        BenchFigures.Phase phase = new BenchFigures.Phase(BenchFigures.SERVICE, n, span.seconds(), span.rate(), meter.finish(), null,
+        BenchFigures.Phase phase = new BenchFigures.Phase(name, n, span.seconds(), span.rate(), meter.finish(), null,
                 s.firstNanos() < 0 ? null : (s.firstNanos() - start) / 1e9,
                 new BenchFigures.Accounting(n, s.results(), s.rejects(), s.duplicates()), null);
         sayDone(phase);

@@ -30,7 +30,7 @@ class BenchCommandTest {
         String bootstrap = TestBroker.get().bootstrapServers();
         Path json = dir.resolve("bench.json");
 
-        CommandRun run = CommandRun.of("bench", "--bootstrap-servers", bootstrap, "--sweeps", 200, "--rate", 50,
+        CommandRun run = CommandRun.of("bench", "--bootstrap-servers", bootstrap, "--sweeps", 200, "--warm-up", 60, "--rate", 50,
                 "--rate-duration", "2s", "--partitions", 2, "--output", json);
 
         assertThat(run.exitCode()).as(run.stderr()).isZero();
@@ -63,6 +63,9 @@ class BenchCommandTest {
         assertThat(figures.get("allAccounted").asBoolean()).isTrue();
         assertThat(figures.at("/machine/cores").asInt()).isEqualTo(Runtime.getRuntime().availableProcessors());
         assertThat(figures.at("/settings/points").asInt()).isEqualTo(401);
+        assertThat(figures.at("/settings/warmUpSweeps").asLong()).isEqualTo(60);
+        // the warm-up ran first, through every phase, and is not among the measured ones
+        assertThat(run.stderr()).contains("warming up on 60 sweeps", "warm-up service");
         assertThat(run.stdout()).contains("service / raw:", "publish", "latency");
         // On a given cluster the run leaves no topics behind.
         try (Admin admin = Admin.create(Map.of(AdminClientConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrap))) {
@@ -75,6 +78,7 @@ class BenchCommandTest {
     void badOptionsAreUsageErrorsThatNameTheOption() {
         Map<List<Object>, String> cases = Map.of(
                 List.of("--sweeps", 0), "--sweeps",
+                List.of("--warm-up", -1), "--warm-up",
                 List.of("--rate", -5), "--rate",
                 List.of("--points", 3), "--points",
                 List.of("--partitions", 0), "--partitions",

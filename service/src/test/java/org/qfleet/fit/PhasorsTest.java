@@ -34,11 +34,16 @@ class PhasorsTest {
 
     @Test
     void gainsMatchTheLibrary() {
-        double[] x = grid(1601);
-        double[] gain = new double[x.length];
-        Phasors.fillGain(0.7, x, true, gain);
-        for (int i = 0; i < x.length; i++) {
-            assertThat(gain[i]).isCloseTo(Math.exp(0.7 * x[i]), within(1e-12));
+        for (int n : new int[] {1, 2, 3, 4, 5, 6, 7, 401, 1601, 20001}) {
+            double[] x = grid(n);
+            for (double s : new double[] {0, 0.7, -3}) {
+                double[] gain = new double[n];
+                Phasors.fillGain(s, x, Phasors.equallySpaced(x), gain);
+                for (int i = 0; i < n; i++) {
+                    double expected = Math.exp(s * x[i]);
+                    assertThat(gain[i]).as("n=%d s=%s i=%d", n, s, i).isCloseTo(expected, within(1e-11 * expected));
+                }
+            }
         }
     }
 }
