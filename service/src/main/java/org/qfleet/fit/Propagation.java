@@ -19,26 +19,26 @@ final class Propagation {
         for (TraceFit fit : fits) {
             shapes.add(fit.shape());
         }
+        List<ResonanceShape> varied = new ArrayList<>(shapes);
         double variance = 0;
         for (int f = 0; f < fits.size(); f++) {
             TraceFit fit = fits.get(f);
-            double[] p = fit.parameters();
+            ShapeVariations v = fit.variations();
             double[][] c = fit.covariance();
-            int n = p.length;
+            int n = v.steps().length;
             double[] gradient = new double[n];
             for (int k = 0; k < n; k++) {
-                double sd = Math.sqrt(Math.max(0, c[k][k]));
-                if (sd == 0) {
+                double h = v.steps()[k];
+                if (h == 0) {
                     continue;
                 }
-                double h = 1e-4 * sd;
-                double[] q = p.clone();
-                q[k] = p[k] + h;
-                double up = evaluate(fits, shapes, f, q, quantity);
-                q[k] = p[k] - h;
-                double down = evaluate(fits, shapes, f, q, quantity);
+                varied.set(f, v.up()[k]);
+                double up = quantity.applyAsDouble(varied);
+                varied.set(f, v.down()[k]);
+                double down = quantity.applyAsDouble(varied);
                 gradient[k] = (up - down) / (2 * h);
             }
+            varied.set(f, shapes.get(f));
             for (int i = 0; i < n; i++) {
                 for (int j = 0; j < n; j++) {
                     variance += gradient[i] * c[i][j] * gradient[j];
@@ -46,12 +46,5 @@ final class Propagation {
             }
         }
         return Math.sqrt(Math.max(0, variance));
-    }
-
-    private static double evaluate(List<TraceFit> fits, List<ResonanceShape> shapes, int index, double[] p,
-                                   ToDoubleFunction<List<ResonanceShape>> quantity) {
-        List<ResonanceShape> varied = new ArrayList<>(shapes);
-        varied.set(index, fits.get(index).shapeOf().apply(p));
-        return quantity.applyAsDouble(varied);
     }
 }
