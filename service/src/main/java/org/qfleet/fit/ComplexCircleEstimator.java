@@ -101,8 +101,9 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
 
         if (!transmission) {
             double[] start = {a[0], a[1], a[2], a[3], x0, g, t, 0};
-            return solve(new CircleProblem(x, re, im, true, true), coarse(new CircleProblem(xs, rs, is, true, true), start, stride),
-                    n, referenceHz, scaleHz, noise);
+            // A position and width taken from another trace are already as good as a coarse solution's.
+            double[] begin = near != null ? start : coarse(new CircleProblem(xs, rs, is, true, true), start, stride);
+            return solve(new CircleProblem(x, re, im, true, true), begin, n, referenceHz, scaleHz, noise);
         }
         CircleProblem plain = new CircleProblem(x, re, im, false, false);
         double[] start = coarse(new CircleProblem(xs, rs, is, false, false), new double[] {a[2], a[3], x0, g, t}, stride);
