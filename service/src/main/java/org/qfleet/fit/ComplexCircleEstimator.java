@@ -28,6 +28,8 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
      * move it by about one anyway.
      */
     private static final double COARSE_VARIANCE_FRACTION = 1e-2;
+    /** The largest turn (rad) by the delay between neighbouring coarse points for a delay read from them. */
+    private static final double MAX_COARSE_TWIST = 1.0;
     /** Coarse points per half width the resonance must keep. */
     private static final double COARSE_POINTS_PER_HALF_WIDTH = 4;
 
@@ -89,12 +91,15 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         double[] peak = near != null ? normalizedPole(near, normalized) : modelFreePeak(x, re, im, topology, noise);
         double x0 = peak[0];
         double g = peak[1];
-        double t = StartingPoint.delay(x, re, im, x0, g);
-
         int stride = stride(n, g / (2.0 / (n - 1)));
         double[] xs = every(x, stride);
         double[] rs = every(re, stride);
         double[] is = every(im, stride);
+        double t = StartingPoint.delay(xs, rs, is, x0, g);
+        if (stride > 1 && Math.abs(t) * (xs[1] - xs[0]) > MAX_COARSE_TWIST) {
+            // The delay turns the coarse points too far apart to follow the phase unambiguously.
+            t = StartingPoint.delay(x, re, im, x0, g);
+        }
         boolean transmission = topology == Topology.TRANSMISSION;
         t = DelaySearch.refine(xs, rs, is, x0, g, t, !transmission);
         double[] a = StartingPoint.linearAmplitudes(xs, rs, is, x0, g, t, !transmission);
