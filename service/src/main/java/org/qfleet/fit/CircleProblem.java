@@ -176,7 +176,7 @@ final class CircleProblem implements LeastSquaresProblem {
         Phasors.fill(p[4], x, equallySpaced, cos, sin);
         double g2 = g * g;
         double cost = 0;
-        double s0 = 0, v1 = 0, t0 = 0, t1 = 0, t2 = 0, w3 = 0, u1 = 0, u2 = 0, u3 = 0, u4 = 0, u5 = 0;
+        double s0 = 0, v1 = 0, t0 = 0, t1 = 0;
         double c0r = 0, c0i = 0, c1r = 0, c1i = 0, c2r = 0, c2i = 0, c3r = 0, c3i = 0, c4r = 0, c4i = 0;
         for (int k = 0; k < x.length; k++) {
             double c = cos[k];
@@ -197,15 +197,7 @@ final class CircleProblem implements LeastSquaresProblem {
             s0 += iq;
             v1 += u * iq;
             t0 += iq2;
-            double uiq2 = u * iq2;
-            t1 += uiq2;
-            t2 += u * uiq2;
-            w3 += u * u * uiq2;
-            u1 += xk * iq;
-            u2 += xk * iq2;
-            u3 += xk * uiq2;
-            u4 += xk * xk * iq;
-            u5 += xk * u * iq;
+            t1 += u * iq2;
             c0r += rr;
             c0i += ri;
             // conj(L) r = (lr - j li) r
@@ -226,6 +218,16 @@ final class CircleProblem implements LeastSquaresProblem {
             c3i += u * qi;
         }
         lastPowerAt = p.clone();
+        // The other geometric sums follow from these four, with u^2 / |D|^2 = 1 - g^2 / |D|^2 and x = u + x0.
+        int n = x.length;
+        double uu1 = n - g2 * s0;                       // sum u^2 / |D|^2
+        double t2 = s0 - g2 * t0;                       // sum u^2 / |D|^4
+        double w3 = v1 - g2 * t1;                       // sum u^3 / |D|^4
+        double u1 = v1 + x0 * s0;                       // sum x / |D|^2
+        double u2 = t1 + x0 * t0;                       // sum x / |D|^4
+        double u3 = t2 + x0 * t1;                       // sum x u / |D|^4
+        double u4 = uu1 + 2 * x0 * v1 + x0 * x0 * s0;   // sum x^2 / |D|^2
+        double u5 = uu1 + x0 * v1;                      // sum x u / |D|^2
         double a2 = ar * ar + ai * ai;
         // K1 = sum (g - j u) / |D|^4, Kg = sum u (g - j u) / |D|^4.
         double k1r = g * t0;
@@ -270,7 +272,6 @@ final class CircleProblem implements LeastSquaresProblem {
                     jtj7[i + 2][j + 2] = e[idx++];
                 }
             }
-            int n = x.length;
             // sum 1/D^2 = g^2 T0 - T2 - 2 j g T1; sum u/D^2 = g^2 T1 - W3 - 2 j g T2; sum x L = g^2 U1 - j g U5.
             double p1r = g2 * t0 - t2;
             double p1i = -2 * g * t1;
