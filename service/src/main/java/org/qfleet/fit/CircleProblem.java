@@ -300,26 +300,24 @@ final class CircleProblem implements LeastSquaresProblem {
 
     /**
      * Normal equations of the model with background and tilt, parameters [br, bi, ar, ai, x0, g, t, s].
-     * With k = exp(s x), L = g / D, q = k A / D^2 and m = k (B + A L), the eight columns of J are the
-     * complex vectors k, j k, k L, j k L, j g q, j u q, -j x m and x m: every entry of J^T J is the
-     * real or imaginary part of one of a few sums over the points (k^2, k^2 L, k q, k u q, conj(kL) q,
-     * |q|^2 and their products with x m), and those pairs (B and j B, A and j A, t and s) share them.
+     * With k = exp(s x), D = g + j u, L = g / D, q = k A / D^2 and m = k (B + A L), the eight columns of
+     * J are the complex vectors k, j k, k L, j k L, j g q, j u q, -j x m and x m, so every entry of J^T J
+     * is the real or imaginary part of a sum of k^2 times powers of u, x and 1/D. With x = u + x0 and
+     * u^2 / |D|^2 = 1 - g^2 / |D|^2 all of those follow from seven sums S[a][b] = sum k^2 u^a / |D|^2b;
+     * J^T r needs six projections of the residual r. One pass accumulates just these.
      */
     private double tiltKernel(double[] p, double[][] jtj, double[] jtr) {
-        double br = p[0];
-        double bi = p[1];
-        double ar = p[2];
-        double ai = p[3];
+        Z b = new Z(p[0], p[1]);
+        Z a = new Z(p[2], p[3]);
         double x0 = p[4];
         double g = p[5];
         Phasors.fill(p[6], x, equallySpaced, cos, sin);
         Phasors.fillGain(p[7], x, equallySpaced, gain);
         double g2 = g * g;
         double cost = 0;
-        double kk = 0, klR = 0, klI = 0, kqR = 0, kqI = 0, kuqR = 0, kuqI = 0;
-        double lqR = 0, lqI = 0, luqR = 0, luqI = 0, qq = 0, uqq = 0, uuqq = 0;
-        double kmR = 0, kmI = 0, lmR = 0, lmI = 0, qmR = 0, qmI = 0, uqmR = 0, uqmI = 0, mm = 0;
-        double krR = 0, krI = 0, lrR = 0, lrI = 0, qrI = 0, uqrI = 0, mrR = 0, mrI = 0;
+        double s00 = 0, s10 = 0, s20 = 0, s01 = 0, s11 = 0, s02 = 0, s12 = 0;
+        double krR = 0, krI = 0, xkrR = 0, xkrI = 0, klrR = 0, klrI = 0, xklrR = 0, xklrI = 0;
+        double p2R = 0, p2I = 0, p3R = 0, p3I = 0;
         for (int i = 0; i < x.length; i++) {
             double c = cos[i];
             double s = sin[i];
@@ -327,119 +325,162 @@ final class CircleProblem implements LeastSquaresProblem {
             double wr = c * zr[i] + s * zi[i];
             double wi = c * zi[i] - s * zr[i];
             double u = xk - x0;
-            double dd = 1 / (g2 + u * u);
-            double lr = g2 * dd;
-            double li = -g * u * dd;
+            double iq = 1 / (g2 + u * u);
+            double lr = g2 * iq;
+            double li = -g * u * iq;
             double k = gain[i];
-            // kL, the model m and x m
-            double klr = k * lr;
-            double kli = k * li;
-            double mr = k * br + ar * klr - ai * kli;
-            double mi = k * bi + ar * kli + ai * klr;
-            double rr = wr - mr;
-            double ri = wi - mi;
+            double rr = wr - k * (b.re + a.re * lr - a.im * li);
+            double ri = wi - k * (b.im + a.re * li + a.im * lr);
             double r2 = rr * rr + ri * ri;
             lastPower[i] = r2;
             cost += r2;
-            double xmr = xk * mr;
-            double xmi = xk * mi;
-            // q = k A / D^2, with 1 / D^2 = (g^2 - u^2 - 2 j g u) / |D|^4
-            double dd2 = k * dd * dd;
-            double er = (g2 - u * u) * dd2;
-            double ei = -2 * g * u * dd2;
-            double qr = ar * er - ai * ei;
-            double qi = ar * ei + ai * er;
-            double ku = k * u;
-            kk += k * k;
-            klR += k * klr;
-            klI += k * kli;
-            kqR += k * qr;
-            kqI += k * qi;
-            kuqR += ku * qr;
-            kuqI += ku * qi;
-            // conj(kL) q
-            double aR = klr * qr + kli * qi;
-            double aI = klr * qi - kli * qr;
-            lqR += aR;
-            lqI += aI;
-            luqR += u * aR;
-            luqI += u * aI;
-            double q2 = qr * qr + qi * qi;
-            qq += q2;
-            uqq += u * q2;
-            uuqq += u * u * q2;
-            kmR += k * xmr;
-            kmI += k * xmi;
-            lmR += klr * xmr + kli * xmi;
-            lmI += klr * xmi - kli * xmr;
-            // conj(q) x m
-            double bR = qr * xmr + qi * xmi;
-            double bI = qr * xmi - qi * xmr;
-            qmR += bR;
-            qmI += bI;
-            uqmR += u * bR;
-            uqmI += u * bI;
-            mm += xmr * xmr + xmi * xmi;
-            krR += k * rr;
-            krI += k * ri;
-            lrR += klr * rr + kli * ri;
-            lrI += klr * ri - kli * rr;
-            double cI = qr * ri - qi * rr;
-            qrI += cI;
-            uqrI += u * cI;
-            mrR += xmr * rr + xmi * ri;
-            mrI += xmr * ri - xmi * rr;
+            double w0 = k * k;
+            double w1 = w0 * iq;
+            double w2 = w1 * iq;
+            double uw0 = u * w0;
+            s00 += w0;
+            s10 += uw0;
+            s20 += u * uw0;
+            s01 += w1;
+            s11 += u * w1;
+            s02 += w2;
+            s12 += u * w2;
+            double kr = k * rr;
+            double ki = k * ri;
+            krR += kr;
+            krI += ki;
+            xkrR += xk * kr;
+            xkrI += xk * ki;
+            // conj(L) k r
+            double lR = lr * kr + li * ki;
+            double lI = lr * ki - li * kr;
+            klrR += lR;
+            klrI += lI;
+            xklrR += xk * lR;
+            xklrI += xk * lI;
+            // conj(1/D^2) k r, with conj(1/D^2) = (g^2 - u^2 + 2 j g u) / |D|^4
+            double iq2 = iq * iq;
+            double e = (g2 - u * u) * iq2;
+            double f = 2 * g * u * iq2;
+            double qR = e * kr - f * ki;
+            double qI = e * ki + f * kr;
+            p2R += qR;
+            p2I += qI;
+            p3R += u * qR;
+            p3I += u * qI;
         }
         lastPowerAt = p.clone();
+        double a2 = a.re * a.re + a.im * a.im;
+        // S[a][b] with more powers of u, from u^2 / |D|^2 = 1 - g^2 / |D|^2
+        double s21 = s00 - g2 * s01;
+        double s22 = s01 - g2 * s02;
+        double s31 = s10 - g2 * s11;
+        double s32 = s11 - g2 * s12;
+        double s42 = s21 - g2 * s22;
+        // sums over k^2 times: L, 1/D^2, u/D^2, u^2/D^2
+        Z kl = new Z(g2 * s01, -g * s11);
+        Z kd2 = new Z(2 * g2 * s02 - s01, -2 * g * s12);
+        Z kud2 = new Z(2 * g2 * s12 - s11, -2 * g * s22);
+        Z kuud2 = new Z(g2 * s22 - s42, -2 * g * s32);
+        // ... and with x = u + x0: x, x/|D|^2, x u/|D|^2, x L, x/D^2, x u/D^2, x conj(1/D^2) L, x u conj(1/D^2) L, x^2 ...
+        double kx = s10 + x0 * s00;
+        double kxIq = s11 + x0 * s01;
+        double kxuIq = s21 + x0 * s11;
+        Z kxl = new Z(g2 * kxIq, -g * kxuIq);
+        Z kxd2 = kud2.plus(kd2.times(x0));
+        Z kxud2 = kuud2.plus(kud2.times(x0));
+        Z kxcd2l = new Z(g2 * (s12 + x0 * s02), g * (s22 + x0 * s12));
+        Z kxucd2l = new Z(g2 * (s22 + x0 * s12), g * (s32 + x0 * s22));
+        double kxx = s20 + 2 * x0 * s10 + x0 * x0 * s00;
+        double kxxIq = s21 + 2 * x0 * s11 + x0 * x0 * s01;
+        Z kxxl = new Z(g2 * kxxIq, -g * (s31 + 2 * x0 * s21 + x0 * x0 * s11));
+        // The sums of the columns' products.
+        Z kq = a.times(kd2);
+        Z kuq = a.times(kud2);
+        Z lq = a.times(new Z(g2 * s02, -g * s12));
+        Z luq = a.times(new Z(g2 * s12, -g * s22));
+        double qq = a2 * s02;
+        double uqq = a2 * s12;
+        double uuqq = a2 * s22;
+        Z km = kxl.times(a).plus(b.times(kx));
+        Z lm = b.times(kxl.conj()).plus(a.times(g2 * kxIq));
+        Z ab = a.conj().times(b);
+        Z qm = ab.times(kxd2.conj()).plus(kxcd2l.times(a2));
+        Z uqm = ab.times(kxud2.conj()).plus(kxucd2l.times(a2));
+        double mm = (b.re * b.re + b.im * b.im) * kxx + 2 * b.conj().times(a).times(kxxl).re + a2 * g2 * kxxIq;
+        // The residual's projections.
+        double qrI = a.conj().times(new Z(p2R, p2I)).im;
+        double uqrI = a.conj().times(new Z(p3R, p3I)).im;
+        Z mr = b.conj().times(new Z(xkrR, xkrI)).plus(a.conj().times(new Z(xklrR, xklrI)));
         double[] r0 = jtj[0];
         double[] r1 = jtj[1];
         double[] r2 = jtj[2];
         double[] r3 = jtj[3];
-        r0[0] = kk;
+        r0[0] = s00;
         r0[1] = 0;
-        r0[2] = klR;
-        r0[3] = -klI;
-        r0[4] = -g * kqI;
-        r0[5] = -kuqI;
-        r0[6] = kmI;
-        r0[7] = kmR;
-        r1[1] = kk;
-        r1[2] = klI;
-        r1[3] = klR;
-        r1[4] = g * kqR;
-        r1[5] = kuqR;
-        r1[6] = -kmR;
-        r1[7] = kmI;
+        r0[2] = kl.re;
+        r0[3] = -kl.im;
+        r0[4] = -g * kq.im;
+        r0[5] = -kuq.im;
+        r0[6] = km.im;
+        r0[7] = km.re;
+        r1[1] = s00;
+        r1[2] = kl.im;
+        r1[3] = kl.re;
+        r1[4] = g * kq.re;
+        r1[5] = kuq.re;
+        r1[6] = -km.re;
+        r1[7] = km.im;
         // |kL|^2 = k^2 Re(L), since |L|^2 = Re(L) = g^2 / |D|^2
-        r2[2] = klR;
+        r2[2] = kl.re;
         r2[3] = 0;
-        r2[4] = -g * lqI;
-        r2[5] = -luqI;
-        r2[6] = lmI;
-        r2[7] = lmR;
-        r3[3] = klR;
-        r3[4] = g * lqR;
-        r3[5] = luqR;
-        r3[6] = -lmR;
-        r3[7] = lmI;
+        r2[4] = -g * lq.im;
+        r2[5] = -luq.im;
+        r2[6] = lm.im;
+        r2[7] = lm.re;
+        r3[3] = kl.re;
+        r3[4] = g * lq.re;
+        r3[5] = luq.re;
+        r3[6] = -lm.re;
+        r3[7] = lm.im;
         jtj[4][4] = g2 * qq;
         jtj[4][5] = g * uqq;
-        jtj[4][6] = -g * qmR;
-        jtj[4][7] = g * qmI;
+        jtj[4][6] = -g * qm.re;
+        jtj[4][7] = g * qm.im;
         jtj[5][5] = uuqq;
-        jtj[5][6] = -uqmR;
-        jtj[5][7] = uqmI;
+        jtj[5][6] = -uqm.re;
+        jtj[5][7] = uqm.im;
         jtj[6][6] = mm;
         jtj[6][7] = 0;
         jtj[7][7] = mm;
         jtr[0] = krR;
         jtr[1] = krI;
-        jtr[2] = lrR;
-        jtr[3] = lrI;
+        jtr[2] = klrR;
+        jtr[3] = klrI;
         jtr[4] = g * qrI;
         jtr[5] = uqrI;
-        jtr[6] = -mrI;
-        jtr[7] = mrR;
+        jtr[6] = -mr.im;
+        jtr[7] = mr.re;
         return cost;
+    }
+
+    /** A complex number for the few products after a pass. */
+    private record Z(double re, double im) {
+
+        Z plus(Z o) {
+            return new Z(re + o.re, im + o.im);
+        }
+
+        Z times(Z o) {
+            return new Z(re * o.re - im * o.im, re * o.im + im * o.re);
+        }
+
+        Z times(double f) {
+            return new Z(re * f, im * f);
+        }
+
+        Z conj() {
+            return new Z(re, -im);
+        }
     }
 }
