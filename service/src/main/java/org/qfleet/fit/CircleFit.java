@@ -13,7 +13,8 @@ package org.qfleet.fit;
  * @param sigma        residual standard deviation per real component
  * @param noiseSigma   noise per real component estimated from the data alone
  * @param points       number of complex points fitted
- * @param residualPower |data - model|^2 at each point
+ * @param residualPower |data - model|^2 at each point, from the optimizer's last pass (within about a tenth of
+ *                      a standard deviation of the parameters)
  */
 record CircleFit(double[] parameters, double[][] covariance, double referenceHz, double scaleHz,
                  boolean background, boolean tilt, double sigma, double noiseSigma, int points, double[] residualPower) {

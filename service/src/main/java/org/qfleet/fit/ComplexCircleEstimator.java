@@ -23,11 +23,6 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
      * the noise; a trace it does not explain is fitted again from its own data.
      */
     private static final double UNEXPLAINED_RESIDUAL = 1.5;
-    /**
-     * The coarse solution stops at steps of about a tenth of its standard deviation: the full data
-     * move it by about one anyway.
-     */
-    private static final double COARSE_VARIANCE_FRACTION = 1e-2;
     /** The largest turn (rad) by the delay between neighbouring coarse points for a delay read from them. */
     private static final double MAX_COARSE_TWIST = 1.0;
     /** Coarse points per half width the resonance must keep. */
@@ -114,7 +109,7 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         double[] start = coarse(new CircleProblem(xs, rs, is, false, false), new double[] {a[2], a[3], x0, g, t}, stride);
         LevenbergMarquardt.Solution s5 = LevenbergMarquardt.solve(plain, start);
         double[] p5 = s5.p();
-        if (backgroundScore(plain, p5) > BACKGROUND_SIGNIFICANCE * s5.cost() / Math.max(1, 2 * n - 7)) {
+        if (backgroundScore(plain, s5.evaluatedAt()) > BACKGROUND_SIGNIFICANCE * s5.cost() / Math.max(1, 2 * n - 7)) {
             CircleProblem withBackground = new CircleProblem(x, re, im, true, false);
             double[] p7 = {0, 0, p5[0], p5[1], p5[2], p5[3], p5[4]};
             LevenbergMarquardt.Solution s7 = LevenbergMarquardt.solve(withBackground, p7);
@@ -161,7 +156,7 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
     }
 
     private static double[] coarse(CircleProblem problem, double[] start, int stride) {
-        return stride == 1 ? start : LevenbergMarquardt.solve(problem, start, COARSE_VARIANCE_FRACTION).p();
+        return stride == 1 ? start : LevenbergMarquardt.solveRoughly(problem, start).p();
     }
 
     private static CircleFit solve(CircleProblem problem, double[] start, int n, double referenceHz, double scaleHz,
@@ -207,6 +202,6 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
             throw new FitException("no resonance found: the fitted width is zero or not finite");
         }
         return new CircleFit(p, inverse, referenceHz, scaleHz, problem.background(), problem.tilt(),
-                Math.sqrt(sigma2), noise, n, problem.residualPower(p));
+                Math.sqrt(sigma2), noise, n, problem.residualPower(s.evaluatedAt()));
     }
 }

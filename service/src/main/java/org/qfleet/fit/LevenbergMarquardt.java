@@ -4,32 +4,42 @@ package org.qfleet.fit;
  * A compact Levenberg-Marquardt solver for problems with a handful of parameters (Marquardt's
  * scaled damping, as in Numerical Recipes ch. 15.5). Every trial point is evaluated with its normal
  * equations in one pass, so an accepted step costs a single pass over the data. The iteration stops
- * when a step lowers the cost by less than 1e-4 of the residual variance, that is when the
- * parameters move by about a hundredth of their own standard deviation; the next step of a
- * converging Gauss-Newton iteration is smaller still by orders of magnitude.
+ * when an evaluated step lowered the cost by less than 1e-4 of the residual variance (the
+ * parameters moved by about a hundredth of their own standard deviation), or when the next step is
+ * predicted to lower it by less than 1e-2 of it (a move of about a tenth of a standard deviation):
+ * that last step is then taken without another pass, since so close to the minimum the
+ * Gauss-Newton model is exact to a small fraction of the step itself.
  */
 final class LevenbergMarquardt {
 
-    /** Solution of a least-squares problem. {@code jtj} is the full (symmetric) matrix at {@code p}. */
-    record Solution(double[] p, double cost, double[][] jtj, int iterations, boolean converged) {
+    /**
+     * Solution of a least-squares problem. {@code cost} and {@code jtj} (the full, symmetric matrix)
+     * were evaluated at {@code evaluatedAt}, which is {@code p} or lies within about a tenth of a
+     * standard deviation of it (the last step, taken without a pass).
+     */
+    record Solution(double[] p, double cost, double[][] jtj, double[] evaluatedAt, int iterations, boolean converged) {
     }
 
     private static final int MAX_ITERATIONS = 100;
-    private static final double VARIANCE_FRACTION = 1e-4;
+    private static final double DROP_FRACTION = 1e-4;
+    private static final double LAST_STEP_FRACTION = 1e-2;
+    /** A solution that only starts a finer one stops at steps of about a third of a standard deviation. */
+    private static final double ROUGH_FRACTION = 1e-1;
     private static final double MAX_LAMBDA = 1e12;
 
     private LevenbergMarquardt() {
     }
 
     static Solution solve(LeastSquaresProblem problem, double[] start) {
-        return solve(problem, start, VARIANCE_FRACTION);
+        return solve(problem, start, DROP_FRACTION, LAST_STEP_FRACTION);
     }
 
-    /**
-     * The same with another stopping fraction of the residual variance: a solution that only starts a
-     * finer one may stop when its steps fall to about a tenth of a standard deviation (1e-2).
-     */
-    static Solution solve(LeastSquaresProblem problem, double[] start, double varianceFraction) {
+    /** A looser solution, for the start of a finer one (a solve on more points). */
+    static Solution solveRoughly(LeastSquaresProblem problem, double[] start) {
+        return solve(problem, start, ROUGH_FRACTION, ROUGH_FRACTION);
+    }
+
+    private static Solution solve(LeastSquaresProblem problem, double[] start, double dropFraction, double lastStepFraction) {
         int n = problem.parameterCount();
         int dof = Math.max(1, problem.residualCount() - n);
         double[] p = start.clone();
@@ -62,11 +72,11 @@ final class LevenbergMarquardt {
                 trial[i] = p[i] + step[i];
                 predicted += step[i] * jtr[i];
             }
-            if (predicted <= varianceFraction * cost / dof) {
-                // Even the full step would gain next to nothing (the Gauss-Newton model predicts
-                // about twice the actual drop near a minimum): stop without evaluating it.
-                converged = true;
-                break;
+            if (predicted <= lastStepFraction * cost / dof) {
+                // Close enough to the minimum for the model to be trusted: take the step unevaluated.
+                double[][] full = jtj;
+                Linear.mirrorUpper(full);
+                return new Solution(trial, cost, full, p, iteration, true);
             }
             double trialCost = problem.normalEquations(trial, trialJtj, trialJtr);
             if (trialCost <= cost) {
@@ -82,7 +92,7 @@ final class LevenbergMarquardt {
                 trialJtr = swapJtr;
                 cost = trialCost;
                 lambda = Math.max(lambda / 10, 1e-12);
-                converged = drop <= varianceFraction * cost / dof;
+                converged = drop <= dropFraction * cost / dof;
             } else {
                 lambda *= 10;
                 // No downhill step left at any damping: the current point is the minimum to working precision.
@@ -90,6 +100,6 @@ final class LevenbergMarquardt {
             }
         }
         Linear.mirrorUpper(jtj);
-        return new Solution(p, cost, jtj, iteration, converged);
+        return new Solution(p, cost, jtj, p, iteration, converged);
     }
 }

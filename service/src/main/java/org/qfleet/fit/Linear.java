@@ -20,7 +20,40 @@ final class Linear {
      * Returns false when A is not positive definite. {@code a} is overwritten.
      */
     static boolean solveSymmetric(double[][] a, double[] b, double[] x) {
-        int n = b.length;
+        if (!factor(a)) {
+            return false;
+        }
+        substitute(a, b, x);
+        return true;
+    }
+
+    /** Inverse of a symmetric positive definite matrix (full storage), or null when singular. */
+    static double[][] inverseSymmetric(double[][] a) {
+        int n = a.length;
+        double[][] factor = new double[n][];
+        for (int i = 0; i < n; i++) {
+            factor[i] = a[i].clone();
+        }
+        if (!factor(factor)) {
+            return null;
+        }
+        double[][] inverse = new double[n][n];
+        double[] e = new double[n];
+        double[] column = new double[n];
+        for (int c = 0; c < n; c++) {
+            java.util.Arrays.fill(e, 0);
+            e[c] = 1;
+            substitute(factor, e, column);
+            for (int r = 0; r < n; r++) {
+                inverse[r][c] = column[r];
+            }
+        }
+        return inverse;
+    }
+
+    /** Replaces the upper triangle of A by R with A = R^T R; false when A is not positive definite. */
+    private static boolean factor(double[][] a) {
+        int n = a.length;
         for (int j = 0; j < n; j++) {
             double d = a[j][j];
             for (int k = 0; k < j; k++) {
@@ -39,43 +72,25 @@ final class Linear {
                 a[j][i] = s / l;
             }
         }
+        return true;
+    }
+
+    /** Solves R^T R x = b with R from {@link #factor}. */
+    private static void substitute(double[][] r, double[] b, double[] x) {
+        int n = b.length;
         for (int i = 0; i < n; i++) {
             double s = b[i];
             for (int k = 0; k < i; k++) {
-                s -= a[k][i] * x[k];
+                s -= r[k][i] * x[k];
             }
-            x[i] = s / a[i][i];
+            x[i] = s / r[i][i];
         }
         for (int i = n - 1; i >= 0; i--) {
             double s = x[i];
             for (int k = i + 1; k < n; k++) {
-                s -= a[i][k] * x[k];
+                s -= r[i][k] * x[k];
             }
-            x[i] = s / a[i][i];
+            x[i] = s / r[i][i];
         }
-        return true;
-    }
-
-    /** Inverse of a symmetric positive definite matrix (full storage), or null when singular. */
-    static double[][] inverseSymmetric(double[][] a) {
-        int n = a.length;
-        double[][] inverse = new double[n][n];
-        double[] e = new double[n];
-        double[] column = new double[n];
-        for (int c = 0; c < n; c++) {
-            double[][] work = new double[n][];
-            for (int i = 0; i < n; i++) {
-                work[i] = a[i].clone();
-            }
-            java.util.Arrays.fill(e, 0);
-            e[c] = 1;
-            if (!solveSymmetric(work, e, column)) {
-                return null;
-            }
-            for (int r = 0; r < n; r++) {
-                inverse[r][c] = column[r];
-            }
-        }
-        return inverse;
     }
 }
