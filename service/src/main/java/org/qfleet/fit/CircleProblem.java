@@ -28,12 +28,17 @@ final class CircleProblem implements LeastSquaresProblem {
     private double[] lastPowerAt = new double[0];
 
     CircleProblem(double[] x, double[] zr, double[] zi, boolean background, boolean tilt) {
+        this(x, zr, zi, background, tilt, Phasors.equallySpaced(x));
+    }
+
+    /** With {@code equallySpaced} already known ({@link Phasors#equallySpaced}) for these abscissae. */
+    CircleProblem(double[] x, double[] zr, double[] zi, boolean background, boolean tilt, boolean equallySpaced) {
         this.x = x;
         this.zr = zr;
         this.zi = zi;
         this.background = background;
         this.tilt = tilt;
-        this.equallySpaced = Phasors.equallySpaced(x);
+        this.equallySpaced = equallySpaced;
         java.util.Arrays.fill(scoredAt, Double.NaN);
         this.gain = new double[x.length];
         this.lastPower = new double[x.length];

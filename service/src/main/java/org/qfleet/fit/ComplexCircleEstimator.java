@@ -96,21 +96,23 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
             t = StartingPoint.delay(x, re, im, x0, g);
         }
         boolean transmission = topology == Topology.TRANSMISSION;
-        t = DelaySearch.refine(xs, rs, is, x0, g, t, !transmission);
-        double[] a = StartingPoint.linearAmplitudes(xs, rs, is, x0, g, t, !transmission);
+        // Every k-th of equally spaced points is equally spaced too.
+        boolean uniform = Phasors.equallySpaced(x);
+        t = DelaySearch.refine(xs, rs, is, x0, g, t, !transmission, uniform);
+        double[] a = StartingPoint.linearAmplitudes(xs, rs, is, x0, g, t, !transmission, uniform);
 
         if (!transmission) {
             double[] start = {a[0], a[1], a[2], a[3], x0, g, t, 0};
             // A position and width taken from another trace are already as good as a coarse solution's.
-            double[] begin = near != null ? start : coarse(new CircleProblem(xs, rs, is, true, true), start, stride);
-            return solve(new CircleProblem(x, re, im, true, true), begin, n, referenceHz, scaleHz, noise);
+            double[] begin = near != null ? start : coarse(new CircleProblem(xs, rs, is, true, true, uniform), start, stride);
+            return solve(new CircleProblem(x, re, im, true, true, uniform), begin, n, referenceHz, scaleHz, noise);
         }
-        CircleProblem plain = new CircleProblem(x, re, im, false, false);
-        double[] start = coarse(new CircleProblem(xs, rs, is, false, false), new double[] {a[2], a[3], x0, g, t}, stride);
+        CircleProblem plain = new CircleProblem(x, re, im, false, false, uniform);
+        double[] start = coarse(new CircleProblem(xs, rs, is, false, false, uniform), new double[] {a[2], a[3], x0, g, t}, stride);
         LevenbergMarquardt.Solution s5 = LevenbergMarquardt.solve(plain, start);
         double[] p5 = s5.p();
         if (backgroundScore(plain, s5.evaluatedAt()) > BACKGROUND_SIGNIFICANCE * s5.cost() / Math.max(1, 2 * n - 7)) {
-            CircleProblem withBackground = new CircleProblem(x, re, im, true, false);
+            CircleProblem withBackground = new CircleProblem(x, re, im, true, false, uniform);
             double[] p7 = {0, 0, p5[0], p5[1], p5[2], p5[3], p5[4]};
             LevenbergMarquardt.Solution s7 = LevenbergMarquardt.solve(withBackground, p7);
             double sigma2 = s7.cost() / Math.max(1, 2 * n - 7);

@@ -15,7 +15,8 @@ final class DelaySearch {
      * a parabola. For fixed position, width and delay the best A and B follow by linear least squares,
      * so each grid point costs one pass over the data (variable projection, Golub and Pereyra 1973).
      */
-    static double refine(double[] x, double[] re, double[] im, double x0, double g, double t, boolean background) {
+    static double refine(double[] x, double[] re, double[] im, double x0, double g, double t, boolean background,
+                         boolean equallySpaced) {
         int n = x.length;
         double[] lr = new double[n];
         double[] li = new double[n];
@@ -35,7 +36,7 @@ final class DelaySearch {
             s2 += a * a + b * b;
             energy += re[i] * re[i] + im[i] * im[i];
         }
-        ProjectedCost projected = new ProjectedCost(x, re, im, lr, li, s1r, s1i, s2, energy, background);
+        ProjectedCost projected = new ProjectedCost(x, re, im, lr, li, s1r, s1i, s2, energy, background, equallySpaced);
         // A coarse grid of twists 0.8 rad apart over the half span, then the neighbours of the best
         // at half that step, and a parabola through the three.
         double step = 0.8;
@@ -77,7 +78,7 @@ final class DelaySearch {
         private final double[] sin;
 
         ProjectedCost(double[] x, double[] re, double[] im, double[] lr, double[] li,
-                      double s1r, double s1i, double s2, double energy, boolean background) {
+                      double s1r, double s1i, double s2, double energy, boolean background, boolean uniform) {
             this.x = x;
             this.re = re;
             this.im = im;
@@ -88,7 +89,7 @@ final class DelaySearch {
             this.s2 = s2;
             this.energy = energy;
             this.background = background;
-            this.uniform = Phasors.equallySpaced(x);
+            this.uniform = uniform;
             this.cos = new double[x.length];
             this.sin = new double[x.length];
         }

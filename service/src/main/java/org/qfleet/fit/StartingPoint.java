@@ -6,6 +6,9 @@ package org.qfleet.fit;
  */
 final class StartingPoint {
 
+    /** About this many points of the smoothed speed give its level away from the line. */
+    private static final int PEDESTAL_POINTS = 100;
+
     private StartingPoint() {
     }
 
@@ -26,10 +29,11 @@ final class StartingPoint {
         while (4 * m < n / 4 && largestSquaredStep(re, im, m) < threshold * threshold) {
             m *= 2;
         }
-        double[] d = differences(re, im, m);
         double[] v = new double[n];
         for (int i = m; i < n - m; i++) {
-            v[i] = d[i] / (x[i + m] - x[i - m]);
+            double a = re[i + m] - re[i - m];
+            double b = im[i + m] - im[i - m];
+            v[i] = Math.sqrt(a * a + b * b) / (x[i + m] - x[i - m]);
         }
         for (int i = 0; i < m; i++) {
             v[i] = v[m];
@@ -42,7 +46,7 @@ final class StartingPoint {
                 k = i;
             }
         }
-        double pedestal = Select.median(s.clone(), n);
+        double pedestal = pedestal(s);
         double half = pedestal + 0.5 * (s[k] - pedestal);
         double left = crossing(x, s, k, -1, half);
         double right = crossing(x, s, k, +1, half);
@@ -71,14 +75,17 @@ final class StartingPoint {
         return new double[] {x0, Math.max(0.5 * corrected, 0.5 * step)};
     }
 
-    private static double[] differences(double[] re, double[] im, int m) {
-        double[] d = new double[re.length];
-        for (int i = m; i < re.length - m; i++) {
-            double a = re[i + m] - re[i - m];
-            double b = im[i + m] - im[i - m];
-            d[i] = Math.sqrt(a * a + b * b);
+    /**
+     * The speed away from the line: the median of the smoothed speed, taken over about a hundred
+     * points spread across the sweep (the line covers well under half of it).
+     */
+    private static double pedestal(double[] s) {
+        int stride = Math.max(1, s.length / PEDESTAL_POINTS);
+        double[] spread = new double[(s.length + stride - 1) / stride];
+        for (int i = 0, j = 0; i < s.length; i += stride, j++) {
+            spread[j] = s[i];
         }
-        return d;
+        return Select.median(spread, spread.length);
     }
 
     /** The largest |z[i + m] - z[i - m]|^2, compared squared so that no root is taken. */
@@ -189,10 +196,11 @@ final class StartingPoint {
         return -intercept;
     }
 
-    static double[] linearAmplitudes(double[] x, double[] re, double[] im, double x0, double g, double t, boolean background) {
+    static double[] linearAmplitudes(double[] x, double[] re, double[] im, double x0, double g, double t, boolean background,
+                                     boolean equallySpaced) {
         double[] cos = new double[x.length];
         double[] sin = new double[x.length];
-        Phasors.fill(t, x, Phasors.equallySpaced(x), cos, sin);
+        Phasors.fill(t, x, equallySpaced, cos, sin);
         return linearAmplitudes(x, re, im, x0, g, cos, sin, background);
     }
 
