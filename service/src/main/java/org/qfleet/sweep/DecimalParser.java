@@ -1,5 +1,10 @@
 package org.qfleet.sweep;
 
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
+import java.nio.ByteOrder;
+import java.nio.charset.StandardCharsets;
+
 /**
  * Converts decimal text such as {@code -6.551601734243408E-4} to the nearest double without creating
  * a String, giving exactly what {@link Double#parseDouble} gives. Plain decimal numbers with at most
@@ -13,6 +18,10 @@ package org.qfleet.sweep;
  * to nearest-even (the Eisel-Lemire algorithm: Lemire, "Number Parsing at a Gigabyte per Second",
  * Software: Practice and Experience 51(8), 2021; recalled from memory), falling back in the rare
  * case the 128-bit product cannot decide the rounding.
+ *
+ * <p>Text comes as characters ({@link #scan(char[], int, int)}, any plain decimal) or as the bytes
+ * of a JSON message ({@link #scanJson(byte[], int, int)}, JSON's stricter grammar); both end in
+ * the same conversion.
  */
 final class DecimalParser {
 
@@ -25,6 +34,9 @@ final class DecimalParser {
         1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11,
         1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22,
     };
+
+    /** Reads eight bytes of a byte array as one long, the first byte lowest. */
+    private static final VarHandle LONGS = MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
 
     private int stop;
 
@@ -114,6 +126,70 @@ final class DecimalParser {
         return negative ? -magnitude : magnitude;
     }
 
+    /**
+     * Reads the JSON number (RFC 8259, section 6: {@code -?(0|[1-9][0-9]*)(.[0-9]+)?([eE][+-]?[0-9]+)?})
+     * that starts at {@code text[start]}, bytes of ASCII text, and ends at the first byte that cannot
+     * continue it, or at {@code end}; {@link #stop()} then tells where. Gives exactly what
+     * {@link Double#parseDouble} gives for those bytes (infinite when they overflow): plain numbers
+     * by the same conversion as {@link #scan(char[], int, int)}, the others through
+     * {@link Double#parseDouble}. NaN (and {@link #stop()} meaningless) when no JSON number starts
+     * there. Not thread-safe: one instance per reader.
+     */
+    double scanJson(byte[] text, int start, int end) {
+        int i = start;
+        boolean negative = i < end && text[i] == '-';
+        if (negative) {
+            i++;
+        }
+        int integerStart = i;
+        i = i < end && text[i] == '0' ? i + 1 : digitsEnd(text, i, end); // no leading zeros in JSON
+        if (i == integerStart) {
+            return Double.NaN;
+        }
+        long digits = accumulate(0, text, integerStart, i);
+        int significant = text[integerStart] == '0' ? 0 : i - integerStart;
+        int exponent = 0;
+        if (i < end && text[i] == '.') {
+            int fractionStart = ++i;
+            if (significant == 0) {
+                while (i < end && text[i] == '0') {
+                    i++;
+                }
+            }
+            int digitsStart = i;
+            i = digitsEnd(text, i, end);
+            if (i == fractionStart) {
+                return Double.NaN;
+            }
+            significant += i - digitsStart;
+            digits = accumulate(digits, text, digitsStart, i);
+            exponent = fractionStart - i;
+        }
+        if (i < end && (text[i] == 'e' || text[i] == 'E')) {
+            i++;
+            boolean negativeExponent = false;
+            if (i < end && (text[i] == '-' || text[i] == '+')) {
+                negativeExponent = text[i] == '-';
+                i++;
+            }
+            int exponentStart = i;
+            int written = 0;
+            for (int d; i < end && (d = text[i] - '0') >= 0 && d <= 9; i++) {
+                written = Math.min(EXPONENT_CAP, 10 * written + d);
+            }
+            if (i == exponentStart) {
+                return Double.NaN;
+            }
+            exponent += negativeExponent ? -written : written;
+        }
+        stop = i;
+        double magnitude = significant > MAX_DIGITS ? Double.NaN : digits == 0 ? 0.0 : scaled(digits, exponent);
+        if (magnitude != magnitude) {
+            return Double.parseDouble(new String(text, start, i - start, StandardCharsets.ISO_8859_1));
+        }
+        return negative ? -magnitude : magnitude;
+    }
+
     /** The end of the run of decimal digits that starts at {@code text[from]}. */
     private static int digitsEnd(char[] text, int from, int end) {
         int i = from;
@@ -139,7 +215,55 @@ final class DecimalParser {
         return value;
     }
 
-    /** Where the number read by the last {@link #scan} ended (exclusive). */
+    /** The end of the run of decimal digits that starts at {@code text[from]}, eight at a time while it can. */
+    private static int digitsEnd(byte[] text, int from, int end) {
+        int i = from;
+        while (i + 8 <= end && eightDigits((long) LONGS.get(text, i))) {
+            i += 8;
+        }
+        while (i < end && text[i] >= '0' && text[i] <= '9') {
+            i++;
+        }
+        return i;
+    }
+
+    /** {@code digits} followed by the decimal digits {@code text[from, to)}, eight at a time while it can. */
+    private static long accumulate(long digits, byte[] text, int from, int to) {
+        long value = digits;
+        int i = from;
+        for (; i + 8 <= to; i += 8) {
+            value = 100_000_000 * value + eightDigitsValue((long) LONGS.get(text, i));
+        }
+        for (; i < to; i++) {
+            value = 10 * value + (text[i] - '0');
+        }
+        return value;
+    }
+
+    /**
+     * True when the eight bytes, read as one little-endian long, are all ASCII digits: the high
+     * nibble of each is 3, and adding 6 leaves it 3 (no byte then carries into the next). A SWAR
+     * ("SIMD within a register") test, common practice in fast number parsers.
+     */
+    private static boolean eightDigits(long bytes) {
+        return ((bytes & 0xF0F0F0F0F0F0F0F0L) | (((bytes + 0x0606060606060606L) & 0xF0F0F0F0F0F0F0F0L) >>> 4))
+                == 0x3333333333333333L;
+    }
+
+    /**
+     * The value of eight ASCII digits read as one little-endian long (first digit in the lowest
+     * byte): each byte becomes 10 times itself plus the next (pairs in the even bytes), then the four
+     * pairs are weighted by 10^6, 10^4, 100 and 1 in the upper half of two products. Common practice
+     * in fast number parsers (SWAR).
+     */
+    private static long eightDigitsValue(long bytes) {
+        long value = bytes - 0x3030303030303030L;
+        value = value * 10 + (value >>> 8);
+        return ((value & 0x000000FF000000FFL) * (100 + (1_000_000L << 32))
+                + ((value >>> 16) & 0x000000FF000000FFL) * (1 + (10_000L << 32))) >>> 32;
+    }
+
+    /** Where the number read by the last {@link #scan} or {@link #scanJson} ended (exclusive). */
     int stop() {
         return stop;
     }
