@@ -38,7 +38,11 @@ final class DecimalParser {
     /** Reads eight bytes of a byte array as one long, the first byte lowest. */
     private static final VarHandle LONGS = MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
 
+    private static final long[] LONG_POWERS_OF_TEN = {1, 10, 100, 1000, 10_000, 100_000, 1_000_000, 10_000_000};
+
     private int stop;
+    /** The digits read so far by {@link #readDigits}, as an integer. */
+    private long mantissa;
 
     /**
      * The double that {@link Double#parseDouble} gives for {@code text[start, end)}.
@@ -142,11 +146,11 @@ final class DecimalParser {
             i++;
         }
         int integerStart = i;
-        i = i < end && text[i] == '0' ? i + 1 : digitsEnd(text, i, end); // no leading zeros in JSON
+        mantissa = 0;
+        i = i < end && text[i] == '0' ? i + 1 : readDigits(text, i, end); // no leading zeros in JSON
         if (i == integerStart) {
             return Double.NaN;
         }
-        long digits = accumulate(0, text, integerStart, i);
         int significant = text[integerStart] == '0' ? 0 : i - integerStart;
         int exponent = 0;
         if (i < end && text[i] == '.') {
@@ -157,12 +161,11 @@ final class DecimalParser {
                 }
             }
             int digitsStart = i;
-            i = digitsEnd(text, i, end);
+            i = readDigits(text, i, end);
             if (i == fractionStart) {
                 return Double.NaN;
             }
             significant += i - digitsStart;
-            digits = accumulate(digits, text, digitsStart, i);
             exponent = fractionStart - i;
         }
         if (i < end && (text[i] == 'e' || text[i] == 'E')) {
@@ -183,7 +186,7 @@ final class DecimalParser {
             exponent += negativeExponent ? -written : written;
         }
         stop = i;
-        double magnitude = significant > MAX_DIGITS ? Double.NaN : digits == 0 ? 0.0 : scaled(digits, exponent);
+        double magnitude = significant > MAX_DIGITS ? Double.NaN : mantissa == 0 ? 0.0 : scaled(mantissa, exponent);
         if (magnitude != magnitude) {
             return Double.parseDouble(new String(text, start, i - start, StandardCharsets.ISO_8859_1));
         }
@@ -215,39 +218,49 @@ final class DecimalParser {
         return value;
     }
 
-    /** The end of the run of decimal digits that starts at {@code text[from]}, eight at a time while it can. */
-    private static int digitsEnd(byte[] text, int from, int end) {
+    /**
+     * Reads the run of decimal digits that starts at {@code text[from]}, appending them to
+     * {@link #mantissa} (modulo 2^64 past 19 digits), and returns where the run ends. Eight bytes
+     * are looked at in one step: all digits, or the digits before the first byte that is not one.
+     */
+    private int readDigits(byte[] text, int from, int end) {
         int i = from;
-        while (i + 8 <= end && eightDigits((long) LONGS.get(text, i))) {
-            i += 8;
+        long value = mantissa;
+        for (; i + 8 <= end; i += 8) {
+            long word = (long) LONGS.get(text, i);
+            long nonDigits = nonDigits(word);
+            if (nonDigits != 0) {
+                int count = Long.numberOfTrailingZeros(nonDigits) >>> 3;
+                mantissa = count == 0 ? value : value * LONG_POWERS_OF_TEN[count] + leadingDigitsValue(word, count);
+                return i + count;
+            }
+            value = 100_000_000 * value + eightDigitsValue(word);
         }
-        while (i < end && text[i] >= '0' && text[i] <= '9') {
-            i++;
+        for (; i < end && text[i] >= '0' && text[i] <= '9'; i++) {
+            value = 10 * value + (text[i] - '0');
         }
+        mantissa = value;
         return i;
     }
 
-    /** {@code digits} followed by the decimal digits {@code text[from, to)}, eight at a time while it can. */
-    private static long accumulate(long digits, byte[] text, int from, int to) {
-        long value = digits;
-        int i = from;
-        for (; i + 8 <= to; i += 8) {
-            value = 100_000_000 * value + eightDigitsValue((long) LONGS.get(text, i));
-        }
-        for (; i < to; i++) {
-            value = 10 * value + (text[i] - '0');
-        }
-        return value;
+    /**
+     * Eight bytes read as one little-endian long, with the high bit of each byte that is not an
+     * ASCII digit set and every other bit clear. After XOR with '0' a digit has a zero high nibble
+     * (halved and added to 0x78, a nonzero one reaches bit 7) and a low nibble below 10 (plus 6, one
+     * of 10 or more reaches bit 4); no sum leaves its byte. A SWAR ("SIMD within a register") test,
+     * common practice in fast number parsers.
+     */
+    private static long nonDigits(long bytes) {
+        long x = bytes ^ 0x3030303030303030L;
+        long highNibble = ((x & 0xF0F0F0F0F0F0F0F0L) >>> 1) + 0x7878787878787878L;
+        long tenOrMore = ((x & 0x0F0F0F0F0F0F0F0FL) + 0x0606060606060606L) << 3;
+        return (highNibble | tenOrMore) & 0x8080808080808080L;
     }
 
-    /**
-     * True when the eight bytes, read as one little-endian long, are all ASCII digits: the high
-     * nibble of each is 3, and adding 6 leaves it 3 (no byte then carries into the next). A SWAR
-     * ("SIMD within a register") test, common practice in fast number parsers.
-     */
-    private static boolean eightDigits(long bytes) {
-        return ((bytes & 0xF0F0F0F0F0F0F0F0L) | (((bytes + 0x0606060606060606L) & 0xF0F0F0F0F0F0F0F0L) >>> 4))
-                == 0x3333333333333333L;
+    /** The value of the first {@code count} (1 to 7) bytes, ASCII digits, of a little-endian long. */
+    private static long leadingDigitsValue(long bytes, int count) {
+        long digits = bytes << 8 * (8 - count); // the digits move to the top, zero bytes come in below
+        return eightDigitsValue(digits | 0x3030303030303030L >>> 8 * count); // ... and become leading '0's
     }
 
     /**

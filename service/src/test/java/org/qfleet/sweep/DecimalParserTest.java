@@ -166,6 +166,24 @@ class DecimalParserTest {
         assertThat(value).isEqualTo(Double.parseDouble(text.substring(0, stop)));
     }
 
+    /** Digits up to the given end are read, however many there are, and never a byte past it. */
+    @Test
+    void readsJsonNumbersFromBytesUpToTheGivenEndOnly() {
+        byte[] digits = "-1234567890123456789012345.98765432109876543210e-1234567890".getBytes(StandardCharsets.ISO_8859_1);
+        DecimalParser parser = new DecimalParser();
+        for (int end = 2; end <= digits.length; end++) {
+            String text = new String(digits, 0, end, StandardCharsets.ISO_8859_1);
+            double value = parser.scanJson(digits, 0, end);
+            if (text.endsWith(".") || text.endsWith("e") || text.endsWith("-") && end > 2) {
+                assertThat(value).as(text).isNaN();
+            } else {
+                assertThat(Double.doubleToRawLongBits(value)).as(text)
+                        .isEqualTo(Double.doubleToRawLongBits(Double.parseDouble(text)));
+                assertThat(parser.stop()).as(text).isEqualTo(end);
+            }
+        }
+    }
+
     /** Reads the text from the middle of a byte array, followed by a byte that cannot continue a number. */
     private static void assertSameAsParseDoubleFromBytes(String text) {
         byte[] bytes = ("[\t" + text + ",\u00b9]").getBytes(StandardCharsets.ISO_8859_1);
