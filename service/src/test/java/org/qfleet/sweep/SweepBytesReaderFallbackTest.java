@@ -96,6 +96,19 @@ class SweepBytesReaderFallbackTest {
     }
 
     @Test
+    void randomBytesGiveTheParsersError() {
+        Random random = new Random(20_240_517L);
+        for (int i = 0; i < 5000; i++) {
+            byte[] bytes = new byte[random.nextInt(200)];
+            random.nextBytes(bytes);
+            if (i % 2 == 0 && bytes.length > 0) {
+                bytes[0] = '{';
+            }
+            assertThat(SameOutcome.check(reader, bytes)).isNull();
+        }
+    }
+
+    @Test
     void randomEditsGiveTheParsersOutcome() {
         Random random = new Random(7L);
         byte[] message = SweepMessage.valid().with("s22", "{\"mag\":[1,1,1,1,1,1,1],\"deg\":[0,1,2,3,4,5,6]}").bytes();
@@ -123,6 +136,14 @@ class SweepBytesReaderFallbackTest {
                 SweepMessage.valid().with("s21", "{\"db\":[1,2,3,4,5,6,7],\"db\":[1,2,3,4,5,6,7]}").json(),
                 SweepMessage.valid().with("x", "1").with("y", "2").json().replace("\"y\"", "\"x\""),
                 SweepMessage.valid().without("lot").without("unit").json(),
+                SweepMessage.valid().without("sweepId").json(),
+                SweepMessage.valid().without("stationId").json(),
+                SweepMessage.valid().without("product").json(),
+                SweepMessage.valid().without("lot").json(),
+                SweepMessage.valid().without("unit").json(),
+                SweepMessage.valid().without("measuredAt").json(),
+                SweepMessage.valid().without("topology").json(),
+                SweepMessage.valid().without("frequencyHz").json(),
                 SweepMessage.valid().without("s21").json(),
                 SweepMessage.valid().with("topology", "\"reflection\"").json(),
                 SweepMessage.valid().with("lot", "\"  \"").json(),
@@ -140,6 +161,7 @@ class SweepBytesReaderFallbackTest {
                 SweepMessage.valid().with("topology", "\"thru\"").json(),
                 SweepMessage.valid().with("topology", "\"Transmission\"").json(),
                 SweepMessage.valid().with("topology", "\"\"").json(),
+                SweepMessage.valid().with("topology", "\"reflect\"").json(),
                 SweepMessage.valid().with("frequencyHz", "[]").json(),
                 SweepMessage.valid().with("s21", "{\"db\":[]}").json(),
                 SweepMessage.valid().with("s21", "{\"db\":[1,2,3,4,5,6]}").json(),
@@ -172,11 +194,16 @@ class SweepBytesReaderFallbackTest {
                 SweepMessage.valid().with("x", "-").json(),
                 SweepMessage.valid().with("lot", "\"L\u0001\"").json(),
                 SweepMessage.valid().with("s21", "{\"phase\":[1,1,1,1,1,1,1]}").json(),
+                SweepMessage.valid().with("s21", "{\"mag\":[1,1,1,1,1,1,1]}").json(),
+                SweepMessage.valid().with("s21", "{\"re\":[1,1,1,1,1,1,1],\"deg\":[1,1,1,1,1,1,1]}").json(),
+                SweepMessage.valid().with("s21", "{\"db\":[1,1,1,1,1,1,1],\"mag\":[1,1,1,1,1,1,1]}").json(),
                 SweepMessage.valid().with("s21", "{}").json(),
                 SweepMessage.valid().with("s21", "{\"re\":[1,1,1,1,1,1,1]}").json(),
                 SweepMessage.valid().with("s21", "{\"re\":[1,1,1,1,1,1,1],\"im\":[1,1,1,1,1,1,1],\"db\":[1,1,1,1,1,1,1]}").json(),
                 SweepMessage.valid().with("measuredAt", "\"2024-05-17\"").json(),
                 SweepMessage.valid().with("measuredAt", "\"2024-13-01T00:00:00Z\"").json(),
+                SweepMessage.valid().with("measuredAt", "\"2024-05-17T09:30:00\"").json(),
+                SweepMessage.valid().with("measuredAt", "\"17/05/2024 09:30\"").json(),
                 SweepMessage.valid().with("measuredAt", "\"now\"").json()));
         return bad.stream();
     }
