@@ -18,7 +18,7 @@ import java.io.Reader;
  * skipped. The result is validated with {@link SweepValidator}. Thread-safe.
  *
  * <p>Messages given as bytes are first tried by {@link SweepBytesReader}, which reads the plain,
- * well-formed common case several times faster and gives up on anything else; the streaming parser
+ * well-formed common case more than twice as fast and gives up on anything else; the streaming parser
  * then reads the message, so results and errors are the same whichever path read it.
  */
 public final class SweepJsonReader {
