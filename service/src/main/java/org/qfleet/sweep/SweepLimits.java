@@ -8,10 +8,10 @@ package org.qfleet.sweep;
  */
 public record SweepLimits(int minPoints, int maxPoints) {
 
-    /** Seven points is the least that can constrain a circle with delay; 100 001 is far above any analyzer's sweep. */
-    /** Default bound on points per sweep, as a constant so that command-line defaults can name it. */
+    /** Default bound on points per sweep (far above any analyzer's sweep), a constant so that command-line defaults can name it. */
     public static final int DEFAULT_MAX_POINTS = 100_001;
 
+    /** Seven points is the least that can constrain a circle with delay. */
     public static final SweepLimits DEFAULT = new SweepLimits(7, DEFAULT_MAX_POINTS);
 
     public SweepLimits {
