@@ -11,7 +11,9 @@ import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
 import org.apache.kafka.clients.admin.Admin;
 import org.apache.kafka.clients.admin.NewTopic;
+import org.apache.kafka.clients.admin.TopicDescription;
 import org.apache.kafka.common.errors.TopicExistsException;
+import org.apache.kafka.common.errors.UnknownTopicOrPartitionException;
 
 /**
  * Checks that the service's topics exist and creates the missing ones when asked to.
@@ -20,6 +22,8 @@ import org.apache.kafka.common.errors.TopicExistsException;
  *                     {@code defaultPartitions}
  */
 public record TopicSetup(Map<String, Integer> partitionsOf, int defaultPartitions, Optional<Short> replicationFactor) {
+
+    private static final long LEADER_POLL_MILLIS = 50;
 
     public TopicSetup {
         partitionsOf = Map.copyOf(partitionsOf);
@@ -52,6 +56,7 @@ public record TopicSetup(Map<String, Integer> partitionsOf, int defaultPartition
         if (topics.isEmpty()) {
             return List.of();
         }
+        long deadline = System.nanoTime() + timeout.toNanos();
         try {
             admin.createTopics(topics).all().get(timeout.toMillis(), TimeUnit.MILLISECONDS);
         } catch (ExecutionException e) {
@@ -59,6 +64,37 @@ public record TopicSetup(Map<String, Integer> partitionsOf, int defaultPartition
                 throw e;
             }
         }
+        awaitLeaders(admin, missing, deadline);
         return missing;
+    }
+
+    /**
+     * Waits until every partition of the new topics has a leader. A producer that writes to a
+     * partition the broker has not taken up yet gets its first request refused; with several
+     * requests in flight a later one can then be written first, and the refused one is retried
+     * until it expires (Apache Kafka issue KAFKA-15591: an idempotent producer loses those records).
+     */
+    private static void awaitLeaders(Admin admin, List<String> topics, long deadline)
+            throws InterruptedException, ExecutionException, TimeoutException {
+        while (true) {
+            long left = deadline - System.nanoTime();
+            if (left <= 0) {
+                throw new TimeoutException("the new topics " + topics + " have no leader yet");
+            }
+            Map<String, TopicDescription> described;
+            try {
+                described = admin.describeTopics(topics).allTopicNames().get(left, TimeUnit.NANOSECONDS);
+            } catch (ExecutionException e) {
+                if (!(e.getCause() instanceof UnknownTopicOrPartitionException)) {
+                    throw e;
+                }
+                described = Map.of();
+            }
+            if (described.size() == topics.size() && described.values().stream()
+                    .allMatch(d -> d.partitions().stream().allMatch(p -> p.leader() != null && !p.leader().isEmpty()))) {
+                return;
+            }
+            Thread.sleep(LEADER_POLL_MILLIS);
+        }
     }
 }
