@@ -267,6 +267,7 @@ final class BenchRun {
         progress.begin(name, n, () -> watcher.accounted(0, n), meter);
         awaitAccounted(watcher, running, 0, n);
         progress.end();
+        say(name + ": tasks by stream thread " + String.join(", ", running.tasksByThread()));
         BenchResultWatcher.Snapshot s = watcher.snapshot();
         long out = s.results() + s.rejects();
         Span span = Span.of(out, s.firstBatch(), start, s.firstNanos(), s.lastNanos());

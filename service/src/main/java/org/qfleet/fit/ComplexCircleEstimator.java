@@ -98,7 +98,8 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         boolean transmission = topology == Topology.TRANSMISSION;
         // Every k-th of equally spaced points is equally spaced too.
         boolean uniform = Phasors.equallySpaced(x);
-        t = DelaySearch.refine(xs, rs, is, x0, g, t, !transmission, uniform);
+        // A fit started from another trace's resonance goes straight to the full data: its delay must be good.
+        t = DelaySearch.refine(xs, rs, is, x0, g, t, !transmission, uniform, near != null);
         double[] a = StartingPoint.linearAmplitudes(xs, rs, is, x0, g, t, !transmission, uniform);
 
         if (!transmission) {

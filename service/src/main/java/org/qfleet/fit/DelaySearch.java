@@ -7,16 +7,21 @@ package org.qfleet.fit;
  */
 final class DelaySearch {
 
+    /** Half width (rad of twist over the half span) of the last parabola. */
+    private static final double FINAL_STEP = 0.05;
+
     private DelaySearch() {
     }
 
     /**
      * Picks the delay with the smallest residual on a grid around the estimate, then refines it by
-     * a parabola. For fixed position, width and delay the best A and B follow by linear least squares,
-     * so each grid point costs one pass over the data (variable projection, Golub and Pereyra 1973).
+     * a parabola, and with {@code precise} by a second, narrow one (worth its two passes when no
+     * coarse solution follows). For fixed position, width and delay the best A and B follow by linear
+     * least squares, so each grid point costs one pass over the data (variable projection, Golub and
+     * Pereyra 1973).
      */
     static double refine(double[] x, double[] re, double[] im, double x0, double g, double t, boolean background,
-                         boolean equallySpaced) {
+                         boolean equallySpaced, boolean precise) {
         int n = x.length;
         double[] lr = new double[n];
         double[] li = new double[n];
@@ -50,15 +55,21 @@ final class DelaySearch {
                 best = t + k * step;
             }
         }
-        double fine = step / 2;
-        double below = projected.at(best - fine);
-        double above = projected.at(best + fine);
-        double denom = below - 2 * bestCost + above;
+        double estimate = parabola(projected, best, bestCost, step / 2);
+        // The cost is a parabola in the delay only close to its minimum: a second, narrow one there.
+        return precise ? parabola(projected, estimate, projected.at(estimate), FINAL_STEP) : estimate;
+    }
+
+    /** The minimum of the parabola through the costs at t - h, t and t + h, kept within t -+ h. */
+    private static double parabola(ProjectedCost projected, double t, double cost, double h) {
+        double below = projected.at(t - h);
+        double above = projected.at(t + h);
+        double denom = below - 2 * cost + above;
         if (denom > 0) {
-            double shift = 0.5 * fine * (below - above) / denom;
-            return best + Math.max(-fine, Math.min(fine, shift));
+            double shift = 0.5 * h * (below - above) / denom;
+            return t + Math.max(-h, Math.min(h, shift));
         }
-        return below < above ? best - fine : best + fine;
+        return below < above ? t - h : t + h;
     }
 
     /** The least-squares cost left after the best A (and B) for a given delay, one pass per delay. */

@@ -93,6 +93,15 @@ public final class StreamService implements AutoCloseable {
         return streams.metadataForLocalThreads().stream().mapToInt(t -> t.activeTasks().size()).sum();
     }
 
+    /** The active tasks of each stream thread, e.g. {@code "StreamThread-1 [0_0, 1_1]"}, for diagnostics. */
+    public List<String> tasksByThread() {
+        return streams.metadataForLocalThreads().stream()
+                .map(t -> t.threadName().replaceFirst(".*-(StreamThread-\\d+)$", "$1") + " "
+                        + t.activeTasks().stream().map(task -> task.taskId().toString()).sorted().toList())
+                .sorted()
+                .toList();
+    }
+
     public KafkaStreams.State state() {
         return streams.state();
     }
