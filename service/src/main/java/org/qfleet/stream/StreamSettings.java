@@ -47,10 +47,11 @@ public record StreamSettings(
     /**
      * A transaction every 100 ms per stream thread, Kafka Streams' own default under exactly-once:
      * results become visible only when their transaction commits, so this interval sets the
-     * latency floor. Measured with {@code bench} on 2 quiet cores (broker in the same JVM): 100 ms
-     * gave p99 175 ms at 200 sweeps/s and 946 sweeps/s saturated; 250 ms gave p99 287 ms and
-     * 1104 sweeps/s. Raise it ({@code --kafka commit.interval.ms=250}) where throughput matters
-     * more than latency.
+     * latency floor. Measured with {@code bench} on 2 quiet cores (broker in the same JVM), first
+     * cold: 100 ms gave p99 175 ms at 200 sweeps/s and 946 sweeps/s saturated, 250 ms p99 287 ms and
+     * 1104 sweeps/s; later, warmed up and with the faster fit and decoder, 100 ms gave p99 127-135 ms
+     * and 3500-4400 sweeps/s, and 200 ms about a fifth more throughput (one run). Raise it
+     * ({@code --kafka commit.interval.ms=250}) where throughput matters more than latency.
      */
     static final int COMMIT_INTERVAL_MS = 100;
 
