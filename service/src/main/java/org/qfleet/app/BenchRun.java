@@ -113,32 +113,12 @@ final class BenchRun {
             phases.add(raw(BenchFigures.RAW, topics, plan.sweeps()));
             checkStop();
         }
-        try (BenchResultWatcher watcher = new BenchResultWatcher(clients, topics.results(), topics.rejects(), sweeps,
-                Math.toIntExact(plan.sweeps() + offered))) {
-            Thread reader = new Thread(watcher, "qfleet-bench-results");
-            reader.setDaemon(true);
-            reader.start();
-            StreamService running = null;
-            try {
-                long start = System.nanoTime();
-                say("starting the service (application id " + applicationId() + ", " + plan.threads() + " stream threads)");
-                running = StreamService.start(service, ProductCatalogue.demoPlant());
-                phases.add(saturation(BenchFigures.SERVICE, watcher, running, start, plan.sweeps()));
-                if (!plan.skipLatency() && !stop.getAsBoolean() && !running.hasFailed()) {
-                    phases.add(latency(sweeps, topics, watcher, running, offered));
-                }
-            } finally {
-                progress.end();
-                if (running != null) {
-                    running.close(SERVICE_CLOSE_TIMEOUT);
-                }
-                watcher.close();
-                reader.join(10_000);
+        withService(sweeps, service, plan.sweeps() + offered, (watcher, running, start) -> {
+            phases.add(saturation(BenchFigures.SERVICE, watcher, running, start, plan.sweeps()));
+            if (!plan.skipLatency() && !stop.getAsBoolean() && !running.hasFailed()) {
+                phases.add(latency(sweeps, topics, watcher, running, offered));
             }
-            if (running.hasFailed()) {
-                throw new BenchException("the service stopped after an error; see the log above");
-            }
-        }
+        });
         checkStop();
         return new BenchFigures(startedAt, BenchMachine.describe(),
                 new BenchFigures.Settings(plan.broker(), plan.sweeps(), plan.warmUpSweeps(), plan.points(), sweeps.distinct(), sweeps.meanMessageBytes(),
@@ -180,25 +160,47 @@ final class BenchRun {
             raw("warm-up raw", topics, n);
             checkStop();
         }
+        withService(sweeps, serviceSettings(topics, applicationId), n,
+                (watcher, running, start) -> saturation("warm-up service", watcher, running, start, n));
+        checkStop();
+    }
+
+    /** What runs while a service works and a watcher reads its results. */
+    @FunctionalInterface
+    private interface ServiceWork {
+        void run(BenchResultWatcher watcher, StreamService running, long startNanos) throws BenchException, InterruptedException;
+    }
+
+    /**
+     * Starts a watcher of the results and rejects and the service, does {@code work}, then stops both;
+     * a service that stopped after an error fails the run.
+     */
+    private void withService(BenchSweeps sweeps, StreamSettings service, long expected, ServiceWork work)
+            throws BenchException, InterruptedException {
+        Topics topics = service.topics();
         try (BenchResultWatcher watcher = new BenchResultWatcher(clients, topics.results(), topics.rejects(), sweeps,
-                Math.toIntExact(n))) {
-            Thread reader = new Thread(watcher, "qfleet-bench-warm-up-results");
+                Math.toIntExact(expected))) {
+            Thread reader = new Thread(watcher, "qfleet-bench-results-" + service.applicationId());
             reader.setDaemon(true);
             reader.start();
-            StreamService running = StreamService.start(serviceSettings(topics, applicationId), ProductCatalogue.demoPlant());
+            StreamService running = null;
             try {
-                saturation("warm-up service", watcher, running, System.nanoTime(), n);
+                long start = System.nanoTime();
+                say("starting the service (application id " + service.applicationId() + ", " + plan.threads() + " stream threads)");
+                running = StreamService.start(service, ProductCatalogue.demoPlant());
+                work.run(watcher, running, start);
             } finally {
                 progress.end();
-                running.close(SERVICE_CLOSE_TIMEOUT);
+                if (running != null) {
+                    running.close(SERVICE_CLOSE_TIMEOUT);
+                }
                 watcher.close();
                 reader.join(10_000);
             }
             if (running.hasFailed()) {
-                throw new BenchException("the service stopped after an error while warming up; see the log above");
+                throw new BenchException("the service " + service.applicationId() + " stopped after an error; see the log above");
             }
         }
-        checkStop();
     }
 
     private void createTopics(Topics topics) throws BenchException, InterruptedException {

@@ -74,9 +74,8 @@ final class LevenbergMarquardt {
             }
             if (predicted <= lastStepFraction * cost / dof) {
                 // Close enough to the minimum for the model to be trusted: take the step unevaluated.
-                double[][] full = jtj;
-                Linear.mirrorUpper(full);
-                return new Solution(trial, cost, full, p, iteration, true);
+                Linear.mirrorUpper(jtj);
+                return new Solution(trial, cost, jtj, p, iteration, true);
             }
             double trialCost = problem.normalEquations(trial, trialJtj, trialJtr);
             if (trialCost <= cost) {

@@ -78,11 +78,18 @@ final class Phasors {
             s3 = c3 * rs + s3 * rc;
             c3 = n3;
         }
-        double[] tailCos = {c0, c1, c2};
-        double[] tailSin = {s0, s1, s2};
-        for (int j = 0; i < n; i++, j++) {
-            cos[i] = tailCos[j];
-            sin[i] = tailSin[j];
+        // At most three points are left, each where its chain stands.
+        if (i < n) {
+            cos[i] = c0;
+            sin[i] = s0;
+        }
+        if (i + 1 < n) {
+            cos[i + 1] = c1;
+            sin[i + 1] = s1;
+        }
+        if (i + 2 < n) {
+            cos[i + 2] = c2;
+            sin[i + 2] = s2;
         }
     }
 
@@ -120,9 +127,14 @@ final class Phasors {
             g2 *= ratio4;
             g3 *= ratio4;
         }
-        double[] tail = {g0, g1, g2};
-        for (int j = 0; i < n; i++, j++) {
-            gain[i] = tail[j];
+        if (i < n) {
+            gain[i] = g0;
+        }
+        if (i + 1 < n) {
+            gain[i + 1] = g1;
+        }
+        if (i + 2 < n) {
+            gain[i + 2] = g2;
         }
     }
 }
