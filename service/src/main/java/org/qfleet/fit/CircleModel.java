@@ -17,12 +17,14 @@ public record CircleModel(
         return f0Hz / (2 * halfWidthHz);
     }
 
+    // Amplitudes of S-parameters are far from where squaring them could overflow or underflow, so
+    // a plain root serves (Math.hypot guards against that at several times the cost).
     public double amplitude() {
-        return Math.hypot(amplitudeRe, amplitudeIm);
+        return Math.sqrt(amplitudeRe * amplitudeRe + amplitudeIm * amplitudeIm);
     }
 
     public double background() {
-        return Math.hypot(backgroundRe, backgroundIm);
+        return Math.sqrt(backgroundRe * backgroundRe + backgroundIm * backgroundIm);
     }
 
     @Override

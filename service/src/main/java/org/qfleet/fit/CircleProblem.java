@@ -17,14 +17,12 @@ final class CircleProblem implements LeastSquaresProblem {
     private final boolean background;
     private final boolean tilt;
     private final boolean equallySpaced;
-    private final double[] cos;
-    private final double[] sin;
-    private final double[] gain;
     private final double[][] scoreJtj = new double[7][7];
     private final double[] scoreJtr = new double[7];
     private final double[] scoredAt = new double[5];
+    private static final int GEOMETRIC_SUMS = 7;
     /** |r|^2 at every point from the last pass with normal equations, and the parameters of that pass. */
-    private final double[] lastPower;
+    private double[] lastPower;
     private double[] lastPowerAt = new double[0];
 
     CircleProblem(double[] x, double[] zr, double[] zi, boolean background, boolean tilt) {
@@ -40,10 +38,6 @@ final class CircleProblem implements LeastSquaresProblem {
         this.tilt = tilt;
         this.equallySpaced = equallySpaced;
         java.util.Arrays.fill(scoredAt, Double.NaN);
-        this.gain = new double[x.length];
-        this.lastPower = new double[x.length];
-        this.cos = new double[x.length];
-        this.sin = new double[x.length];
     }
 
     boolean background() {
@@ -95,24 +89,64 @@ final class CircleProblem implements LeastSquaresProblem {
     }
 
     private double costOnly(double[] p) {
-        return residuals(p, null);
+        double cost = residuals(p, power(), null);
+        lastPowerAt = p.clone();
+        return cost;
     }
 
     /**
-     * |r|^2 at every point for parameters p, for the residual checks: kept from the last pass when it
-     * was made at p (the optimizer's last pass normally is), else one more pass.
+     * The cost and J^T J without J^T r: J^T J depends on the parameters and the abscissae only, through
+     * the seven geometric sums, so this pass skips the residual's projections.
+     */
+    @Override
+    public double costAndCurvature(double[] p, double[][] jtj) {
+        double[] sums = new double[GEOMETRIC_SUMS];
+        double cost = residuals(p, power(), sums);
+        lastPowerAt = p.clone();
+        if (!background) {
+            placeUpper5x5(plainCurvature(p, sums[3], sums[4], sums[5], sums[6]), jtj, 0);
+        } else if (tilt) {
+            tiltCurvature(p, sums, jtj);
+        } else {
+            double[][] jtj8 = new double[8][8];
+            tiltCurvature(java.util.Arrays.copyOf(p, 8), sums, jtj8);
+            for (int i = 0; i < 7; i++) {
+                System.arraycopy(jtj8[i], i, jtj[i], i, 7 - i);
+            }
+        }
+        return cost;
+    }
+
+    /**
+     * |r|^2 at every point for parameters p, for the residual checks: the array of the last pass when
+     * it was made at p (the optimizer's last pass normally is), handed over rather than copied (a later
+     * pass starts a new one), else one more pass.
      */
     double[] residualPower(double[] p) {
         if (java.util.Arrays.equals(p, lastPowerAt)) {
-            return lastPower.clone();
+            double[] out = lastPower;
+            lastPower = null;
+            lastPowerAt = new double[0];
+            return out;
         }
         double[] out = new double[x.length];
-        residuals(p, out);
+        residuals(p, out, null);
         return out;
     }
 
-    /** The sum of |r|^2, and each term into {@code out} when it is not null. */
-    private double residuals(double[] p, double[] out) {
+    /** The array the next pass writes |r|^2 into. */
+    private double[] power() {
+        if (lastPower == null) {
+            lastPower = new double[x.length];
+        }
+        return lastPower;
+    }
+
+    /**
+     * The sum of |r|^2, each term into {@code out} and the geometric sums S[a][b] = sum k^2 u^a / |D|^2b
+     * into {@code sums} (in the order S00, S10, S20, S01, S11, S02, S12) when they are not null.
+     */
+    private double residuals(double[] p, double[] out, double[] sums) {
         int o = background ? 2 : 0;
         double br = background ? p[0] : 0;
         double bi = background ? p[1] : 0;
@@ -121,10 +155,17 @@ final class CircleProblem implements LeastSquaresProblem {
         double x0 = p[o + 2];
         double g = p[o + 3];
         double slope = tilt ? p[o + 5] : 0;
+        PassScratch scratch = PassScratch.of(x.length);
+        double[] cos = scratch.cos();
+        double[] sin = scratch.sin();
+        double[] gain = scratch.gain();
         Phasors.fill(p[o + 4], x, equallySpaced, cos, sin);
-        Phasors.fillGain(slope, x, equallySpaced, gain);
+        if (tilt) {
+            Phasors.fillGain(slope, x, equallySpaced, gain);
+        }
         double g2 = g * g;
         double cost = 0;
+        double s00 = 0, s10 = 0, s20 = 0, s01 = 0, s11 = 0, s02 = 0, s12 = 0;
         for (int k = 0; k < x.length; k++) {
             double wr = cos[k] * zr[k] + sin[k] * zi[k];
             double wi = cos[k] * zi[k] - sin[k] * zr[k];
@@ -132,7 +173,7 @@ final class CircleProblem implements LeastSquaresProblem {
             double dd = 1 / (g2 + u * u);
             double lr = g2 * dd;
             double li = -g * u * dd;
-            double k1 = gain[k];
+            double k1 = tilt ? gain[k] : 1;
             double rr = wr - k1 * (br + ar * lr - ai * li);
             double ri = wi - k1 * (bi + ar * li + ai * lr);
             double r2 = rr * rr + ri * ri;
@@ -140,6 +181,28 @@ final class CircleProblem implements LeastSquaresProblem {
             if (out != null) {
                 out[k] = r2;
             }
+            if (sums != null) {
+                double w0 = k1 * k1;
+                double w1 = w0 * dd;
+                double w2 = w1 * dd;
+                double uw0 = u * w0;
+                s00 += w0;
+                s10 += uw0;
+                s20 += u * uw0;
+                s01 += w1;
+                s11 += u * w1;
+                s02 += w2;
+                s12 += u * w2;
+            }
+        }
+        if (sums != null) {
+            sums[0] = s00;
+            sums[1] = s10;
+            sums[2] = s20;
+            sums[3] = s01;
+            sums[4] = s11;
+            sums[5] = s02;
+            sums[6] = s12;
         }
         return cost;
     }
@@ -178,7 +241,11 @@ final class CircleProblem implements LeastSquaresProblem {
         double ai = p[1];
         double x0 = p[2];
         double g = p[3];
+        PassScratch scratch = PassScratch.of(x.length);
+        double[] cos = scratch.cos();
+        double[] sin = scratch.sin();
         Phasors.fill(p[4], x, equallySpaced, cos, sin);
+        double[] power = power();
         double g2 = g * g;
         double cost = 0;
         double s0 = 0, v1 = 0, t0 = 0, t1 = 0;
@@ -197,7 +264,7 @@ final class CircleProblem implements LeastSquaresProblem {
             double rr = wr - (ar * lr - ai * li);
             double ri = wi - (ar * li + ai * lr);
             double r2 = rr * rr + ri * ri;
-            lastPower[k] = r2;
+            power[k] = r2;
             cost += r2;
             s0 += iq;
             v1 += u * iq;
@@ -229,32 +296,8 @@ final class CircleProblem implements LeastSquaresProblem {
         double t2 = s0 - g2 * t0;                       // sum u^2 / |D|^4
         double w3 = v1 - g2 * t1;                       // sum u^3 / |D|^4
         double u1 = v1 + x0 * s0;                       // sum x / |D|^2
-        double u2 = t1 + x0 * t0;                       // sum x / |D|^4
-        double u3 = t2 + x0 * t1;                       // sum x u / |D|^4
-        double u4 = uu1 + 2 * x0 * v1 + x0 * x0 * s0;   // sum x^2 / |D|^2
         double u5 = uu1 + x0 * v1;                      // sum x u / |D|^2
-        double a2 = ar * ar + ai * ai;
-        // K1 = sum (g - j u) / |D|^4, Kg = sum u (g - j u) / |D|^4.
-        double k1r = g * t0;
-        double k1i = -t1;
-        double kgr = g * t1;
-        double kgi = -t2;
-        double[] e = new double[15];
-        e[0] = g2 * s0;                                   // ar ar
-        e[1] = 0;                                         // ar ai
-        e[2] = -g2 * (ar * k1i + ai * k1r);               // ar x0: Re(j g^2 A K1)
-        e[3] = -g * (ar * kgi + ai * kgr);                // ar g:  Re(j g A Kg)
-        e[4] = g2 * u1 * ai;                              // ar t
-        e[5] = g2 * s0;                                   // ai ai
-        e[6] = g2 * (ar * k1r - ai * k1i);                // ai x0: Re(g^2 A K1)
-        e[7] = g * (ar * kgr - ai * kgi);                 // ai g:  Re(g A Kg)
-        e[8] = -g2 * u1 * ar;                             // ai t
-        e[9] = g2 * a2 * t0;                              // x0 x0
-        e[10] = g * a2 * t1;                              // x0 g
-        e[11] = -g2 * g * a2 * u2;                        // x0 t
-        e[12] = a2 * t2;                                  // g g
-        e[13] = -g2 * a2 * u3;                            // g t
-        e[14] = a2 * g2 * u4;                             // t t
+        double[] e = plainCurvature(p, s0, v1, t0, t1);
         double[] v = {
             c1r,
             c1i,
@@ -262,21 +305,11 @@ final class CircleProblem implements LeastSquaresProblem {
             ar * c3i - ai * c3r,                          // Im(conj(A) C3)
             -(ar * c4i - ai * c4r)                        // -Im(conj(A) C4)
         };
-        int idx = 0;
-        for (int i = 0; i < 5; i++) {
-            jtr[i] = v[i];
-            for (int j = i; j < 5; j++) {
-                jtj[i][j] = e[idx++];
-            }
-        }
+        System.arraycopy(v, 0, jtr, 0, 5);
+        placeUpper5x5(e, jtj, 0);
         if (jtj7 != null) {
-            idx = 0;
-            for (int i = 0; i < 5; i++) {
-                jtr7[i + 2] = v[i];
-                for (int j = i; j < 5; j++) {
-                    jtj7[i + 2][j + 2] = e[idx++];
-                }
-            }
+            System.arraycopy(v, 0, jtr7, 2, 5);
+            placeUpper5x5(e, jtj7, 2);
             // sum 1/D^2 = g^2 T0 - T2 - 2 j g T1; sum u/D^2 = g^2 T1 - W3 - 2 j g T2; sum x L = g^2 U1 - j g U5.
             double p1r = g2 * t0 - t2;
             double p1i = -2 * g * t1;
@@ -304,6 +337,60 @@ final class CircleProblem implements LeastSquaresProblem {
     }
 
     /**
+     * J^T J of the background-free model, upper triangle by rows, from the sums S0 = sum 1/|D|^2,
+     * V1 = sum u/|D|^2, T0 = sum 1/|D|^4 and T1 = sum u/|D|^4 (the others follow from these four,
+     * with u^2 / |D|^2 = 1 - g^2 / |D|^2 and x = u + x0).
+     */
+    private double[] plainCurvature(double[] p, double s0, double v1, double t0, double t1) {
+        double ar = p[0];
+        double ai = p[1];
+        double x0 = p[2];
+        double g = p[3];
+        double g2 = g * g;
+        int n = x.length;
+        double uu1 = n - g2 * s0;                       // sum u^2 / |D|^2
+        double t2 = s0 - g2 * t0;                       // sum u^2 / |D|^4
+        double u1 = v1 + x0 * s0;                       // sum x / |D|^2
+        double u2 = t1 + x0 * t0;                       // sum x / |D|^4
+        double u3 = t2 + x0 * t1;                       // sum x u / |D|^4
+        double u4 = uu1 + 2 * x0 * v1 + x0 * x0 * s0;   // sum x^2 / |D|^2
+        double a2 = ar * ar + ai * ai;
+        // K1 = sum (g - j u) / |D|^4, Kg = sum u (g - j u) / |D|^4.
+        double k1r = g * t0;
+        double k1i = -t1;
+        double kgr = g * t1;
+        double kgi = -t2;
+        double[] e = new double[15];
+        e[0] = g2 * s0;                                   // ar ar
+        e[1] = 0;                                         // ar ai
+        e[2] = -g2 * (ar * k1i + ai * k1r);               // ar x0: Re(j g^2 A K1)
+        e[3] = -g * (ar * kgi + ai * kgr);                // ar g:  Re(j g A Kg)
+        e[4] = g2 * u1 * ai;                              // ar t
+        e[5] = g2 * s0;                                   // ai ai
+        e[6] = g2 * (ar * k1r - ai * k1i);                // ai x0: Re(g^2 A K1)
+        e[7] = g * (ar * kgr - ai * kgi);                 // ai g:  Re(g A Kg)
+        e[8] = -g2 * u1 * ar;                             // ai t
+        e[9] = g2 * a2 * t0;                              // x0 x0
+        e[10] = g * a2 * t1;                              // x0 g
+        e[11] = -g2 * g * a2 * u2;                        // x0 t
+        e[12] = a2 * t2;                                  // g g
+        e[13] = -g2 * a2 * u3;                            // g t
+        e[14] = a2 * g2 * u4;                             // t t
+        return e;
+    }
+
+    /** Copies the 5 x 5 upper triangle given by rows into {@code m}, starting at row and column {@code offset}. */
+    private static void placeUpper5x5(double[] upper, double[][] m, int offset) {
+        int k = 5;
+        int idx = 0;
+        for (int i = 0; i < k; i++) {
+            for (int j = i; j < k; j++) {
+                m[i + offset][j + offset] = upper[idx++];
+            }
+        }
+    }
+
+    /**
      * Normal equations of the model with background and tilt, parameters [br, bi, ar, ai, x0, g, t, s].
      * With k = exp(s x), D = g + j u, L = g / D, q = k A / D^2 and m = k (B + A L), the eight columns of
      * J are the complex vectors k, j k, k L, j k L, j g q, j u q, -j x m and x m, so every entry of J^T J
@@ -312,12 +399,19 @@ final class CircleProblem implements LeastSquaresProblem {
      * J^T r needs six projections of the residual r. One pass accumulates just these.
      */
     private double tiltKernel(double[] p, double[][] jtj, double[] jtr) {
-        Z b = new Z(p[0], p[1]);
-        Z a = new Z(p[2], p[3]);
+        double br = p[0];
+        double bi = p[1];
+        double ar = p[2];
+        double ai = p[3];
         double x0 = p[4];
         double g = p[5];
+        PassScratch scratch = PassScratch.of(x.length);
+        double[] cos = scratch.cos();
+        double[] sin = scratch.sin();
+        double[] gain = scratch.gain();
         Phasors.fill(p[6], x, equallySpaced, cos, sin);
         Phasors.fillGain(p[7], x, equallySpaced, gain);
+        double[] power = power();
         double g2 = g * g;
         double cost = 0;
         double s00 = 0, s10 = 0, s20 = 0, s01 = 0, s11 = 0, s02 = 0, s12 = 0;
@@ -334,10 +428,10 @@ final class CircleProblem implements LeastSquaresProblem {
             double lr = g2 * iq;
             double li = -g * u * iq;
             double k = gain[i];
-            double rr = wr - k * (b.re + a.re * lr - a.im * li);
-            double ri = wi - k * (b.im + a.re * li + a.im * lr);
+            double rr = wr - k * (br + ar * lr - ai * li);
+            double ri = wi - k * (bi + ar * li + ai * lr);
             double r2 = rr * rr + ri * ri;
-            lastPower[i] = r2;
+            power[i] = r2;
             cost += r2;
             double w0 = k * k;
             double w1 = w0 * iq;
@@ -375,6 +469,41 @@ final class CircleProblem implements LeastSquaresProblem {
             p3I += u * qI;
         }
         lastPowerAt = p.clone();
+        tiltCurvature(p, new double[] {s00, s10, s20, s01, s11, s02, s12}, jtj);
+        // The residual's projections.
+        Z b = new Z(p[0], p[1]);
+        Z a = new Z(p[2], p[3]);
+        double qrI = a.conj().times(new Z(p2R, p2I)).im;
+        double uqrI = a.conj().times(new Z(p3R, p3I)).im;
+        Z mr = b.conj().times(new Z(xkrR, xkrI)).plus(a.conj().times(new Z(xklrR, xklrI)));
+        jtr[0] = krR;
+        jtr[1] = krI;
+        jtr[2] = klrR;
+        jtr[3] = klrI;
+        jtr[4] = g * qrI;
+        jtr[5] = uqrI;
+        jtr[6] = -mr.im;
+        jtr[7] = mr.re;
+        return cost;
+    }
+
+    /**
+     * J^T J of the model with background and tilt (see {@link #tiltKernel}), upper triangle, from the
+     * seven geometric sums S00, S10, S20, S01, S11, S02, S12.
+     */
+    private static void tiltCurvature(double[] p, double[] sums, double[][] jtj) {
+        Z b = new Z(p[0], p[1]);
+        Z a = new Z(p[2], p[3]);
+        double x0 = p[4];
+        double g = p[5];
+        double g2 = g * g;
+        double s00 = sums[0];
+        double s10 = sums[1];
+        double s20 = sums[2];
+        double s01 = sums[3];
+        double s11 = sums[4];
+        double s02 = sums[5];
+        double s12 = sums[6];
         double a2 = a.re * a.re + a.im * a.im;
         // S[a][b] with more powers of u, from u^2 / |D|^2 = 1 - g^2 / |D|^2
         double s21 = s00 - g2 * s01;
@@ -413,10 +542,6 @@ final class CircleProblem implements LeastSquaresProblem {
         Z qm = ab.times(kxd2.conj()).plus(kxcd2l.times(a2));
         Z uqm = ab.times(kxud2.conj()).plus(kxucd2l.times(a2));
         double mm = (b.re * b.re + b.im * b.im) * kxx + 2 * b.conj().times(a).times(kxxl).re + a2 * g2 * kxxIq;
-        // The residual's projections.
-        double qrI = a.conj().times(new Z(p2R, p2I)).im;
-        double uqrI = a.conj().times(new Z(p3R, p3I)).im;
-        Z mr = b.conj().times(new Z(xkrR, xkrI)).plus(a.conj().times(new Z(xklrR, xklrI)));
         double[] r0 = jtj[0];
         double[] r1 = jtj[1];
         double[] r2 = jtj[2];
@@ -458,15 +583,6 @@ final class CircleProblem implements LeastSquaresProblem {
         jtj[6][6] = mm;
         jtj[6][7] = 0;
         jtj[7][7] = mm;
-        jtr[0] = krR;
-        jtr[1] = krI;
-        jtr[2] = klrR;
-        jtr[3] = klrI;
-        jtr[4] = g * qrI;
-        jtr[5] = uqrI;
-        jtr[6] = -mr.im;
-        jtr[7] = mr.re;
-        return cost;
     }
 
     /** A complex number for the few products after a pass. */

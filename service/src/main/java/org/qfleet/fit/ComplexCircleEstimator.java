@@ -83,7 +83,9 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         double scaleHz = normalized.scaleHz();
         double[] x = normalized.x();
         double noise = NoiseEstimate.complexSigma(re, im);
-        double[] peak = near != null ? normalizedPole(near, normalized) : modelFreePeak(x, re, im, topology, noise);
+        // Every k-th of equally spaced points is equally spaced too.
+        boolean uniform = Phasors.equallySpaced(x);
+        double[] peak = near != null ? normalizedPole(near, normalized) : modelFreePeak(x, re, im, topology, noise, uniform);
         double x0 = peak[0];
         double g = peak[1];
         int stride = stride(n, g / (2.0 / (n - 1)));
@@ -96,11 +98,10 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
             t = StartingPoint.delay(x, re, im, x0, g);
         }
         boolean transmission = topology == Topology.TRANSMISSION;
-        // Every k-th of equally spaced points is equally spaced too.
-        boolean uniform = Phasors.equallySpaced(x);
         // A fit started from another trace's resonance goes straight to the full data: its delay must be good.
-        t = DelaySearch.refine(xs, rs, is, x0, g, t, !transmission, uniform, near != null);
-        double[] a = StartingPoint.linearAmplitudes(xs, rs, is, x0, g, t, !transmission, uniform);
+        DelaySearch.Start delayStart = DelaySearch.refine(xs, rs, is, x0, g, t, !transmission, uniform, near != null);
+        t = delayStart.delay();
+        double[] a = delayStart.amplitudes();
 
         if (!transmission) {
             double[] start = {a[0], a[1], a[2], a[3], x0, g, t, 0};
@@ -112,7 +113,7 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         double[] start = coarse(new CircleProblem(xs, rs, is, false, false, uniform), new double[] {a[2], a[3], x0, g, t}, stride);
         LevenbergMarquardt.Solution s5 = LevenbergMarquardt.solve(plain, start);
         double[] p5 = s5.p();
-        if (backgroundScore(plain, s5.evaluatedAt()) > BACKGROUND_SIGNIFICANCE * s5.cost() / Math.max(1, 2 * n - 7)) {
+        if (backgroundScore(plain, s5.gradientAt()) > BACKGROUND_SIGNIFICANCE * s5.cost() / Math.max(1, 2 * n - 7)) {
             CircleProblem withBackground = new CircleProblem(x, re, im, true, false, uniform);
             double[] p7 = {0, 0, p5[0], p5[1], p5[2], p5[3], p5[4]};
             LevenbergMarquardt.Solution s7 = LevenbergMarquardt.solve(withBackground, p7);
@@ -125,12 +126,13 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
     }
 
     /** Position and half width of the line from the data alone, as {x0, g}. */
-    private static double[] modelFreePeak(double[] x, double[] re, double[] im, Topology topology, double noise) {
+    private static double[] modelFreePeak(double[] x, double[] re, double[] im, Topology topology, double noise,
+                                          boolean uniform) {
         // Behind a large background (notch, reflection) a long delay spins the whole trace faster than
         // the resonance moves along it: take the delay out first, from the background's phase slope.
         double spin = topology == Topology.TRANSMISSION ? 0 : StartingPoint.backgroundDelay(x, re, im);
-        return spin == 0 ? StartingPoint.speedPeak(x, re, im, noise)
-                : StartingPoint.speedPeak(x, StartingPoint.rotated(x, re, im, spin), noise);
+        return spin == 0 ? StartingPoint.speedPeak(x, re, im, noise, uniform)
+                : StartingPoint.speedPeak(x, StartingPoint.rotated(x, re, im, spin, uniform), noise, uniform);
     }
 
     /** The pole of a known resonance (the inverse of {@link ResonanceShape#fromPole}) in normalized units, as {x0, g}. */
@@ -168,14 +170,29 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
     }
 
     /**
-     * The cost reduction one Gauss-Newton step of the model with a background would bring from the
-     * background-free solution: the score test of the background, from the same pass over the data.
+     * The cost reduction a background would bring to the background-free solution: the drop one
+     * Gauss-Newton step of the model with a background would make from the point where the plain
+     * fit was linearized, less the drop the plain model's own step makes from there (nothing at its
+     * minimum): the score test of the background, from the same pass over the data.
      */
     private static double backgroundScore(CircleProblem plain, double[] p5) {
-        int k = 7;
-        double[][] jtj = new double[k][k];
-        double[] jtr = new double[k];
+        double[][] jtj = new double[7][7];
+        double[] jtr = new double[7];
         plain.backgroundScoreEquations(p5, jtj, jtr);
+        double[][] jtj5 = new double[5][5];
+        double[] jtr5 = new double[5];
+        for (int i = 0; i < 5; i++) {
+            System.arraycopy(jtj[i + 2], 2, jtj5[i], 0, 5);
+            jtr5[i] = jtr[i + 2];
+        }
+        double withBackground = gaussNewtonDrop(jtj, jtr);
+        double plainDrop = gaussNewtonDrop(jtj5, jtr5);
+        return Double.isFinite(plainDrop) ? withBackground - plainDrop : Double.POSITIVE_INFINITY;
+    }
+
+    /** The drop in cost J^T r . (J^T J)^-1 J^T r that a Gauss-Newton step predicts (upper triangles used). */
+    private static double gaussNewtonDrop(double[][] jtj, double[] jtr) {
+        int k = jtr.length;
         for (int i = 0; i < k; i++) {
             // A whisper of damping keeps the near-degenerate directions (background against delay) solvable.
             jtj[i][i] *= 1 + 1e-9;

@@ -8,16 +8,24 @@ package org.qfleet.fit;
  * parameters moved by about a hundredth of their own standard deviation), or when the next step is
  * predicted to lower it by less than 1e-2 of it (a move of about a tenth of a standard deviation):
  * that last step is then taken without another pass, since so close to the minimum the
- * Gauss-Newton model is exact to a small fraction of the step itself.
+ * Gauss-Newton model is exact to a small fraction of the step itself. A step of up to ten standard
+ * deviations is first tried with the cost and J^T J alone (about half a pass, where the problem can
+ * do without the residual's projections): when the cost falls by what the quadratic model predicted
+ * closely enough that the point reached lies within 1e-2 of the residual variance of the minimum
+ * (a move of a tenth of a standard deviation at most), the iteration stops there (the ratio test of
+ * trust-region methods, Nocedal and Wright, Numerical Optimization, 2nd ed., ch. 4, made strict).
  */
 final class LevenbergMarquardt {
 
     /**
      * Solution of a least-squares problem. {@code cost} and {@code jtj} (the full, symmetric matrix)
      * were evaluated at {@code evaluatedAt}, which is {@code p} or lies within about a tenth of a
-     * standard deviation of it (the last step, taken without a pass).
+     * standard deviation of it (the last step, taken without a pass); {@code jtr} at
+     * {@code gradientAt}, which is {@code evaluatedAt} or, after a step confirmed by its cost, the
+     * point it started from.
      */
-    record Solution(double[] p, double cost, double[][] jtj, double[] evaluatedAt, int iterations, boolean converged) {
+    record Solution(double[] p, double cost, double[][] jtj, double[] evaluatedAt, double[] jtr, double[] gradientAt,
+                    int iterations, boolean converged) {
     }
 
     private static final int MAX_ITERATIONS = 100;
@@ -26,6 +34,8 @@ final class LevenbergMarquardt {
     /** A solution that only starts a finer one stops at steps of about a third of a standard deviation. */
     private static final double ROUGH_FRACTION = 1e-1;
     private static final double MAX_LAMBDA = 1e12;
+    /** Steps predicted to lower the cost by at most this many residual variances are tried with the cost alone. */
+    private static final double CHECKED_STEP_FRACTION = 100;
 
     private LevenbergMarquardt() {
     }
@@ -72,10 +82,23 @@ final class LevenbergMarquardt {
                 trial[i] = p[i] + step[i];
                 predicted += step[i] * jtr[i];
             }
-            if (predicted <= lastStepFraction * cost / dof) {
+            double variance = cost / dof;
+            if (predicted <= lastStepFraction * variance) {
                 // Close enough to the minimum for the model to be trusted: take the step unevaluated.
                 Linear.mirrorUpper(jtj);
-                return new Solution(trial, cost, jtj, p, iteration, true);
+                return new Solution(trial, cost, jtj, p, jtr, p, iteration, true);
+            }
+            if (predicted <= CHECKED_STEP_FRACTION * variance) {
+                double trialCost = problem.costAndCurvature(trial, trialJtj);
+                if (modelHolds(cost - trialCost, modelDrop(predicted, jtj, lambda, step), lastStepFraction * variance)) {
+                    Linear.mirrorUpper(trialJtj);
+                    return new Solution(trial, trialCost, trialJtj, trial, jtr, p, iteration, true);
+                }
+                if (trialCost > cost) {
+                    lambda *= 10;
+                    converged = lambda > MAX_LAMBDA;
+                    continue;
+                }
             }
             double trialCost = problem.normalEquations(trial, trialJtj, trialJtr);
             if (trialCost <= cost) {
@@ -99,6 +122,29 @@ final class LevenbergMarquardt {
             }
         }
         Linear.mirrorUpper(jtj);
-        return new Solution(p, cost, jtj, p, iteration, converged);
+        return new Solution(p, cost, jtj, p, jtr, p, iteration, converged);
+    }
+
+    /**
+     * The drop the quadratic model predicts for a step: 2 step.J^T r - step.J^T J.step, which with
+     * (J^T J + damping) step = J^T r is step.J^T r + step.damping.step.
+     */
+    private static double modelDrop(double predicted, double[][] jtj, double lambda, double[] step) {
+        double drop = predicted;
+        for (int i = 0; i < step.length; i++) {
+            drop += (lambda * jtj[i][i] + 1e-300) * step[i] * step[i];
+        }
+        return drop;
+    }
+
+    /**
+     * Whether a step that reached the model's minimum left the true one within {@code tolerance} in
+     * cost: a cubic term e, the gap between the actual and the predicted drop D, leaves the slope 3e
+     * at the end of the step and so the point about 9 e^2 / 4 D above the minimum along it (the
+     * other directions are taken to be as nearly quadratic as this one).
+     */
+    private static boolean modelHolds(double actualDrop, double modelDrop, double tolerance) {
+        double gap = actualDrop - modelDrop;
+        return modelDrop > 0 && 9 * gap * gap <= 4 * modelDrop * tolerance;
     }
 }

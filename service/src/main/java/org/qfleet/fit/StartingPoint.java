@@ -18,9 +18,11 @@ final class StartingPoint {
      * width at half height is 2 g, whatever the background.
      *
      * @param noise standard deviation of the noise per component (the same for a rotated trace)
+     * @param equallySpaced whether x is equally spaced: the speed is then taken per step, not per unit of x
+     *                      (only its ratios matter)
      * @return {x0, g}
      */
-    static double[] speedPeak(double[] x, double[] re, double[] im, double noise) {
+    static double[] speedPeak(double[] x, double[] re, double[] im, double noise, boolean equallySpaced) {
         int n = x.length;
         // Difference over a baseline of 2m points, m doubled until the largest step stands well out of
         // the noise (|dz| of pure noise averages 1.8 sigma): long baselines see through noise, short ones resolve narrow lines.
@@ -29,17 +31,7 @@ final class StartingPoint {
         while (4 * m < n / 4 && largestSquaredStep(re, im, m) < threshold * threshold) {
             m *= 2;
         }
-        double[] v = new double[n];
-        for (int i = m; i < n - m; i++) {
-            double a = re[i + m] - re[i - m];
-            double b = im[i + m] - im[i - m];
-            v[i] = Math.sqrt(a * a + b * b) / (x[i + m] - x[i - m]);
-        }
-        for (int i = 0; i < m; i++) {
-            v[i] = v[m];
-            v[n - 1 - i] = v[n - 1 - m];
-        }
-        double[] s = smooth(v, Math.max(1, m / 2));
+        double[] s = smoothedSpeed(x, re, im, m, Math.max(1, m / 2), equallySpaced);
         int k = 0;
         for (int i = 1; i < n; i++) {
             if (s[i] > s[k]) {
@@ -110,21 +102,50 @@ final class StartingPoint {
         return Double.NaN;
     }
 
-    private static double[] smooth(double[] v, int halfWindow) {
-        int n = v.length;
+    /**
+     * The speed |z[i + m] - z[i - m]| / (x[i + m] - x[i - m]) (held at its last value over the m points
+     * at either end) averaged over 2 halfWindow + 1 points, through its running sums.
+     */
+    private static double[] smoothedSpeed(double[] x, double[] re, double[] im, int m, int halfWindow,
+                                          boolean equallySpaced) {
+        int n = x.length;
         double[] prefix = new double[n + 1];
+        double first = speed(x, re, im, m, m, equallySpaced);
         double running = 0;
-        for (int i = 0; i < n; i++) {
-            running += v[i];
+        for (int i = 0; i < m; i++) {
+            running += first;
+            prefix[i + 1] = running;
+        }
+        for (int i = m; i < n - m; i++) {
+            double a = re[i + m] - re[i - m];
+            double b = im[i + m] - im[i - m];
+            running += equallySpaced ? Math.sqrt(a * a + b * b) : Math.sqrt(a * a + b * b) / (x[i + m] - x[i - m]);
+            prefix[i + 1] = running;
+        }
+        double last = speed(x, re, im, n - 1 - m, m, equallySpaced);
+        for (int i = Math.max(m, n - m); i < n; i++) {
+            running += last;
             prefix[i + 1] = running;
         }
         double[] s = new double[n];
-        for (int i = 0; i < n; i++) {
-            int lo = Math.max(0, i - halfWindow);
-            int hi = Math.min(n - 1, i + halfWindow);
-            s[i] = (prefix[hi + 1] - prefix[lo]) / (hi - lo + 1);
+        // The window (at most a sixteenth of the sweep) is cut short by the ends only for its first and last points.
+        int h = halfWindow;
+        for (int i = 0; i < h; i++) {
+            s[i] = prefix[i + halfWindow + 1] / (i + halfWindow + 1);
+            s[n - 1 - i] = (prefix[n] - prefix[n - 1 - i - halfWindow]) / (i + halfWindow + 1);
+        }
+        double perWindow = 1.0 / (2 * halfWindow + 1);
+        for (int i = h; i < n - h; i++) {
+            s[i] = (prefix[i + halfWindow + 1] - prefix[i - halfWindow]) * perWindow;
         }
         return s;
+    }
+
+    private static double speed(double[] x, double[] re, double[] im, int i, int m, boolean equallySpaced) {
+        double a = re[i + m] - re[i - m];
+        double b = im[i + m] - im[i - m];
+        double step = Math.sqrt(a * a + b * b);
+        return equallySpaced ? step : step / (x[i + m] - x[i - m]);
     }
 
     /**
@@ -148,11 +169,12 @@ final class StartingPoint {
     }
 
     /** The trace with the delay t taken out, as {re, im}. */
-    static double[][] rotated(double[] x, double[] re, double[] im, double t) {
+    static double[][] rotated(double[] x, double[] re, double[] im, double t, boolean equallySpaced) {
         int n = x.length;
-        double[] cos = new double[n];
-        double[] sin = new double[n];
-        Phasors.fill(t, x, Phasors.equallySpaced(x), cos, sin);
+        PassScratch scratch = PassScratch.of(n);
+        double[] cos = scratch.cos();
+        double[] sin = scratch.sin();
+        Phasors.fill(t, x, equallySpaced, cos, sin);
         double[][] out = new double[2][n];
         for (int i = 0; i < n; i++) {
             out[0][i] = cos[i] * re[i] + sin[i] * im[i];
@@ -161,8 +183,8 @@ final class StartingPoint {
         return out;
     }
 
-    static double[] speedPeak(double[] x, double[][] reIm, double noise) {
-        return speedPeak(x, reIm[0], reIm[1], noise);
+    static double[] speedPeak(double[] x, double[][] reIm, double noise, boolean equallySpaced) {
+        return speedPeak(x, reIm[0], reIm[1], noise, equallySpaced);
     }
 
     /**
@@ -194,50 +216,5 @@ final class StartingPoint {
         }
         double intercept = (swhh * sws - swh * swhs) / det;
         return -intercept;
-    }
-
-    static double[] linearAmplitudes(double[] x, double[] re, double[] im, double x0, double g, double t, boolean background,
-                                     boolean equallySpaced) {
-        double[] cos = new double[x.length];
-        double[] sin = new double[x.length];
-        Phasors.fill(t, x, equallySpaced, cos, sin);
-        return linearAmplitudes(x, re, im, x0, g, cos, sin, background);
-    }
-
-    /**
-     * Background B and resonance A by linear least squares for a fixed position, width and delay.
-     *
-     * @return {br, bi, ar, ai} (B = 0 without background)
-     */
-    static double[] linearAmplitudes(double[] x, double[] re, double[] im, double x0, double g,
-                                     double[] cos, double[] sin, boolean background) {
-        int n = x.length;
-        double s1r = 0, s1i = 0, s2 = 0, y0r = 0, y0i = 0, y1r = 0, y1i = 0;
-        for (int i = 0; i < n; i++) {
-            double c = cos[i];
-            double s = sin[i];
-            double wr = c * re[i] + s * im[i];
-            double wi = c * im[i] - s * re[i];
-            double u = x[i] - x0;
-            double d = 1 / (g * g + u * u);
-            double lr = g * g * d;
-            double li = -g * u * d;
-            s1r += lr;
-            s1i += li;
-            s2 += lr * lr + li * li;
-            y0r += wr;
-            y0i += wi;
-            y1r += lr * wr + li * wi;
-            y1i += lr * wi - li * wr;
-        }
-        if (!background) {
-            return new double[] {0, 0, y1r / s2, y1i / s2};
-        }
-        double det = n * s2 - (s1r * s1r + s1i * s1i);
-        double br = (s2 * y0r - (s1r * y1r - s1i * y1i)) / det;
-        double bi = (s2 * y0i - (s1r * y1i + s1i * y1r)) / det;
-        double ar = (n * y1r - (s1r * y0r + s1i * y0i)) / det;
-        double ai = (n * y1i - (s1r * y0i - s1i * y0r)) / det;
-        return new double[] {br, bi, ar, ai};
     }
 }
