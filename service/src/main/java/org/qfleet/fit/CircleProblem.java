@@ -279,11 +279,9 @@ final class CircleProblem implements LeastSquaresProblem {
             c1i += pi;
             c4r += xk * pr;
             c4i += xk * pi;
-            // conj(1/D^2) r = ((g^2 - u^2) + 2 j g u) / |D|^4 r
-            double er = (g2 - u * u) * iq2;
-            double ei = 2 * g * u * iq2;
-            double qr = er * rr - ei * ri;
-            double qi = er * ri + ei * rr;
+            // g^2 conj(1/D^2) r = conj(L) (conj(L) r), since L = g / D
+            double qr = lr * pr + li * pi;
+            double qi = lr * pi - li * pr;
             c2r += qr;
             c2i += qi;
             c3r += u * qr;
@@ -301,8 +299,8 @@ final class CircleProblem implements LeastSquaresProblem {
         double[] v = {
             c1r,
             c1i,
-            g * (ar * c2i - ai * c2r),                    // g Im(conj(A) C2)
-            ar * c3i - ai * c3r,                          // Im(conj(A) C3)
+            (ar * c2i - ai * c2r) / g,                    // g Im(conj(A) C2), with g^2 C2 summed
+            (ar * c3i - ai * c3r) / g2,                   // Im(conj(A) C3), with g^2 C3 summed
             -(ar * c4i - ai * c4r)                        // -Im(conj(A) C4)
         };
         System.arraycopy(v, 0, jtr, 0, 5);
@@ -457,12 +455,9 @@ final class CircleProblem implements LeastSquaresProblem {
             klrI += lI;
             xklrR += xk * lR;
             xklrI += xk * lI;
-            // conj(1/D^2) k r, with conj(1/D^2) = (g^2 - u^2 + 2 j g u) / |D|^4
-            double iq2 = iq * iq;
-            double e = (g2 - u * u) * iq2;
-            double f = 2 * g * u * iq2;
-            double qR = e * kr - f * ki;
-            double qI = e * ki + f * kr;
+            // g^2 conj(1/D^2) k r = conj(L) (conj(L) k r), since L = g / D
+            double qR = lr * lR + li * lI;
+            double qI = lr * lI - li * lR;
             p2R += qR;
             p2I += qI;
             p3R += u * qR;
@@ -473,8 +468,9 @@ final class CircleProblem implements LeastSquaresProblem {
         // The residual's projections.
         Z b = new Z(p[0], p[1]);
         Z a = new Z(p[2], p[3]);
-        double qrI = a.conj().times(new Z(p2R, p2I)).im;
-        double uqrI = a.conj().times(new Z(p3R, p3I)).im;
+        // P2 and P3 were summed times g^2.
+        double qrI = a.conj().times(new Z(p2R, p2I)).im / g2;
+        double uqrI = a.conj().times(new Z(p3R, p3I)).im / g2;
         Z mr = b.conj().times(new Z(xkrR, xkrI)).plus(a.conj().times(new Z(xklrR, xklrI)));
         jtr[0] = krR;
         jtr[1] = krI;
