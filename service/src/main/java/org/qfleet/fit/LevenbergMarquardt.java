@@ -2,18 +2,19 @@ package org.qfleet.fit;
 
 /**
  * A compact Levenberg-Marquardt solver for problems with a handful of parameters (Marquardt's
- * scaled damping, as in Numerical Recipes ch. 15.5). Every trial point is evaluated with its normal
+ * scaled damping, as in Numerical Recipes ch. 15.5). A trial point is evaluated with its normal
  * equations in one pass, so an accepted step costs a single pass over the data. The iteration stops
  * when an evaluated step lowered the cost by less than 1e-4 of the residual variance (the
  * parameters moved by about a hundredth of their own standard deviation), or when the next step is
  * predicted to lower it by less than 1e-2 of it (a move of about a tenth of a standard deviation):
  * that last step is then taken without another pass, since so close to the minimum the
  * Gauss-Newton model is exact to a small fraction of the step itself. A step of up to ten standard
- * deviations is first tried with the cost and J^T J alone (about half a pass, where the problem can
- * do without the residual's projections): when the cost falls by what the quadratic model predicted
- * closely enough that the point reached lies within 1e-2 of the residual variance of the minimum
- * (a move of a tenth of a standard deviation at most), the iteration stops there (the ratio test of
- * trust-region methods, Nocedal and Wright, Numerical Optimization, 2nd ed., ch. 4, made strict).
+ * deviations is first tried with the cost and J^T J alone (cheaper than a full pass where the
+ * problem can leave out the residual's projections): when the cost falls by what the quadratic
+ * model predicted closely enough that the point reached lies within 1e-2 of the residual variance
+ * of the minimum (a tenth of a standard deviation at most), the iteration stops there, with J^T J
+ * of that point (the ratio test of trust-region methods, Nocedal and Wright, Numerical
+ * Optimization, 2nd ed., ch. 4, made strict); otherwise the full pass follows.
  */
 final class LevenbergMarquardt {
 
@@ -34,7 +35,7 @@ final class LevenbergMarquardt {
     /** A solution that only starts a finer one stops at steps of about a third of a standard deviation. */
     private static final double ROUGH_FRACTION = 1e-1;
     private static final double MAX_LAMBDA = 1e12;
-    /** Steps predicted to lower the cost by at most this many residual variances are tried with the cost alone. */
+    /** Steps predicted to lower the cost by at most this many residual variances are tried with cost and J^T J alone. */
     private static final double CHECKED_STEP_FRACTION = 100;
 
     private LevenbergMarquardt() {

@@ -11,8 +11,9 @@ record NormalizedFrequency(double referenceHz, double scaleHz, double[] x) {
         double reference = 0.5 * (frequencyHz[0] + frequencyHz[n - 1]);
         double scale = 0.5 * (frequencyHz[n - 1] - frequencyHz[0]);
         double[] x = new double[n];
+        double perHz = 1 / scale;
         for (int i = 0; i < n; i++) {
-            x[i] = (frequencyHz[i] - reference) / scale;
+            x[i] = (frequencyHz[i] - reference) * perHz;
         }
         return new NormalizedFrequency(reference, scale, x);
     }
