@@ -27,25 +27,40 @@ final class Linear {
         return true;
     }
 
-    /** Inverse of a symmetric positive definite matrix (full storage), or null when singular. */
+    /**
+     * Inverse of a symmetric positive definite matrix (full storage), or null when singular: with
+     * A = R^T R, A^-1 = T T^T for the triangular T = R^-1 (a third of the work of solving for each
+     * column of the identity).
+     */
     static double[][] inverseSymmetric(double[][] a) {
         int n = a.length;
-        double[][] factor = new double[n][];
+        double[][] r = new double[n][];
         for (int i = 0; i < n; i++) {
-            factor[i] = a[i].clone();
+            r[i] = a[i].clone();
         }
-        if (!factor(factor)) {
+        if (!factor(r)) {
             return null;
         }
+        double[][] t = new double[n][n];
+        for (int j = 0; j < n; j++) {
+            t[j][j] = 1 / r[j][j];
+            for (int i = j - 1; i >= 0; i--) {
+                double s = 0;
+                for (int k = i + 1; k <= j; k++) {
+                    s += r[i][k] * t[k][j];
+                }
+                t[i][j] = -s / r[i][i];
+            }
+        }
         double[][] inverse = new double[n][n];
-        double[] e = new double[n];
-        double[] column = new double[n];
-        for (int c = 0; c < n; c++) {
-            java.util.Arrays.fill(e, 0);
-            e[c] = 1;
-            substitute(factor, e, column);
-            for (int r = 0; r < n; r++) {
-                inverse[r][c] = column[r];
+        for (int i = 0; i < n; i++) {
+            for (int j = i; j < n; j++) {
+                double s = 0;
+                for (int k = j; k < n; k++) {
+                    s += t[i][k] * t[j][k];
+                }
+                inverse[i][j] = s;
+                inverse[j][i] = s;
             }
         }
         return inverse;
