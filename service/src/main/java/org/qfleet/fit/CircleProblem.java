@@ -20,7 +20,6 @@ final class CircleProblem implements LeastSquaresProblem {
     private final double[][] scoreJtj = new double[7][7];
     private final double[] scoreJtr = new double[7];
     private final double[] scoredAt = new double[5];
-    private static final int GEOMETRIC_SUMS = 7;
     /** |r|^2 at every point from the last pass with normal equations, and the parameters of that pass. */
     private double[] lastPower;
     private double[] lastPowerAt = new double[0];
@@ -89,31 +88,8 @@ final class CircleProblem implements LeastSquaresProblem {
     }
 
     private double costOnly(double[] p) {
-        double cost = residuals(p, power(), null);
+        double cost = residuals(p, power());
         lastPowerAt = p.clone();
-        return cost;
-    }
-
-    /**
-     * The cost and J^T J without J^T r: J^T J depends on the parameters and the abscissae only, through
-     * the seven geometric sums, so this pass skips the residual's projections.
-     */
-    @Override
-    public double costAndCurvature(double[] p, double[][] jtj) {
-        double[] sums = new double[GEOMETRIC_SUMS];
-        double cost = residuals(p, power(), sums);
-        lastPowerAt = p.clone();
-        if (!background) {
-            placeUpper5x5(plainCurvature(p, sums[3], sums[4], sums[5], sums[6]), jtj, 0);
-        } else if (tilt) {
-            tiltCurvature(p, sums, jtj);
-        } else {
-            double[][] jtj8 = new double[8][8];
-            tiltCurvature(java.util.Arrays.copyOf(p, 8), sums, jtj8);
-            for (int i = 0; i < 7; i++) {
-                System.arraycopy(jtj8[i], i, jtj[i], i, 7 - i);
-            }
-        }
         return cost;
     }
 
@@ -130,7 +106,7 @@ final class CircleProblem implements LeastSquaresProblem {
             return out;
         }
         double[] out = new double[x.length];
-        residuals(p, out, null);
+        residuals(p, out);
         return out;
     }
 
@@ -142,11 +118,8 @@ final class CircleProblem implements LeastSquaresProblem {
         return lastPower;
     }
 
-    /**
-     * The sum of |r|^2, each term into {@code out} and the geometric sums S[a][b] = sum k^2 u^a / |D|^2b
-     * into {@code sums} (in the order S00, S10, S20, S01, S11, S02, S12) when they are not null.
-     */
-    private double residuals(double[] p, double[] out, double[] sums) {
+    /** The sum of |r|^2, and each term into {@code out} when it is not null. */
+    private double residuals(double[] p, double[] out) {
         int o = background ? 2 : 0;
         double br = background ? p[0] : 0;
         double bi = background ? p[1] : 0;
@@ -165,7 +138,6 @@ final class CircleProblem implements LeastSquaresProblem {
         }
         double g2 = g * g;
         double cost = 0;
-        double s00 = 0, s10 = 0, s20 = 0, s01 = 0, s11 = 0, s02 = 0, s12 = 0;
         for (int k = 0; k < x.length; k++) {
             double wr = cos[k] * zr[k] + sin[k] * zi[k];
             double wi = cos[k] * zi[k] - sin[k] * zr[k];
@@ -181,28 +153,6 @@ final class CircleProblem implements LeastSquaresProblem {
             if (out != null) {
                 out[k] = r2;
             }
-            if (sums != null) {
-                double w0 = k1 * k1;
-                double w1 = w0 * dd;
-                double w2 = w1 * dd;
-                double uw0 = u * w0;
-                s00 += w0;
-                s10 += uw0;
-                s20 += u * uw0;
-                s01 += w1;
-                s11 += u * w1;
-                s02 += w2;
-                s12 += u * w2;
-            }
-        }
-        if (sums != null) {
-            sums[0] = s00;
-            sums[1] = s10;
-            sums[2] = s20;
-            sums[3] = s01;
-            sums[4] = s11;
-            sums[5] = s02;
-            sums[6] = s12;
         }
         return cost;
     }
@@ -233,7 +183,8 @@ final class CircleProblem implements LeastSquaresProblem {
      * background evaluated at B = 0 (for the score test of the background), in one pass. With
      * D = g + j u, L = g / D, M = A L and r the residual, every entry reduces to a handful of sums
      * over the points: geometric ones (powers of u and x over |D|^2 and |D|^4) and the projections
-     * of r on conj(L), conj(1/D^2), u conj(1/D^2) and x conj(L). Parameters [ar, ai, x0, g, t];
+     * of r on 1, conj(L) and conj(L)^2 (those on u conj(1/D^2) and x conj(L) follow from them, since
+     * u conj(L) = j g (1 - conj(L))). Parameters [ar, ai, x0, g, t];
      * the extension orders them [br, bi, ar, ai, x0, g, t].
      */
     double plainWithBackgroundScore(double[] p, double[][] jtj, double[] jtr, double[][] jtj7, double[] jtr7) {
@@ -249,7 +200,7 @@ final class CircleProblem implements LeastSquaresProblem {
         double g2 = g * g;
         double cost = 0;
         double s0 = 0, v1 = 0, t0 = 0, t1 = 0;
-        double c0r = 0, c0i = 0, c1r = 0, c1i = 0, c2r = 0, c2i = 0, c3r = 0, c3i = 0, c4r = 0, c4i = 0;
+        double c0r = 0, c0i = 0, c1r = 0, c1i = 0, c2r = 0, c2i = 0;
         for (int k = 0; k < x.length; k++) {
             double c = cos[k];
             double s = sin[k];
@@ -277,17 +228,17 @@ final class CircleProblem implements LeastSquaresProblem {
             double pi = lr * ri - li * rr;
             c1r += pr;
             c1i += pi;
-            c4r += xk * pr;
-            c4i += xk * pi;
             // g^2 conj(1/D^2) r = conj(L) (conj(L) r), since L = g / D
-            double qr = lr * pr + li * pi;
-            double qi = lr * pi - li * pr;
-            c2r += qr;
-            c2i += qi;
-            c3r += u * qr;
-            c3i += u * qi;
+            c2r += lr * pr + li * pi;
+            c2i += lr * pi - li * pr;
         }
         lastPowerAt = p.clone();
+        // u conj(L) = j g (1 - conj(L)) gives the projections with a factor u or x = u + x0 from these:
+        // C3 = sum u conj(L)^2 r = j g (C1 - C2) and C4 = sum x conj(L) r = j g (C0 - C1) + x0 C1.
+        double c3r = -g * (c1i - c2i);
+        double c3i = g * (c1r - c2r);
+        double c4r = -g * (c0i - c1i) + x0 * c1r;
+        double c4i = g * (c0r - c1r) + x0 * c1i;
         // The other geometric sums follow from these four, with u^2 / |D|^2 = 1 - g^2 / |D|^2 and x = u + x0.
         int n = x.length;
         double uu1 = n - g2 * s0;                       // sum u^2 / |D|^2
@@ -394,7 +345,8 @@ final class CircleProblem implements LeastSquaresProblem {
      * J are the complex vectors k, j k, k L, j k L, j g q, j u q, -j x m and x m, so every entry of J^T J
      * is the real or imaginary part of a sum of k^2 times powers of u, x and 1/D. With x = u + x0 and
      * u^2 / |D|^2 = 1 - g^2 / |D|^2 all of those follow from seven sums S[a][b] = sum k^2 u^a / |D|^2b;
-     * J^T r needs six projections of the residual r. One pass accumulates just these.
+     * J^T r needs four projections of the residual r (two more follow from them, since
+     * u conj(L) = j g (1 - conj(L))). One pass accumulates just these.
      */
     private double tiltKernel(double[] p, double[][] jtj, double[] jtr) {
         double br = p[0];
@@ -413,8 +365,8 @@ final class CircleProblem implements LeastSquaresProblem {
         double g2 = g * g;
         double cost = 0;
         double s00 = 0, s10 = 0, s20 = 0, s01 = 0, s11 = 0, s02 = 0, s12 = 0;
-        double krR = 0, krI = 0, xkrR = 0, xkrI = 0, klrR = 0, klrI = 0, xklrR = 0, xklrI = 0;
-        double p2R = 0, p2I = 0, p3R = 0, p3I = 0;
+        double krR = 0, krI = 0, xkrR = 0, xkrI = 0, klrR = 0, klrI = 0;
+        double p2R = 0, p2I = 0;
         for (int i = 0; i < x.length; i++) {
             double c = cos[i];
             double s = sin[i];
@@ -453,25 +405,23 @@ final class CircleProblem implements LeastSquaresProblem {
             double lI = lr * ki - li * kr;
             klrR += lR;
             klrI += lI;
-            xklrR += xk * lR;
-            xklrI += xk * lI;
             // g^2 conj(1/D^2) k r = conj(L) (conj(L) k r), since L = g / D
-            double qR = lr * lR + li * lI;
-            double qI = lr * lI - li * lR;
-            p2R += qR;
-            p2I += qI;
-            p3R += u * qR;
-            p3I += u * qI;
+            p2R += lr * lR + li * lI;
+            p2I += lr * lI - li * lR;
         }
         lastPowerAt = p.clone();
         tiltCurvature(p, new double[] {s00, s10, s20, s01, s11, s02, s12}, jtj);
         // The residual's projections.
         Z b = new Z(p[0], p[1]);
         Z a = new Z(p[2], p[3]);
-        // P2 and P3 were summed times g^2.
+        // P2 (and so P3) summed times g^2.
         double qrI = a.conj().times(new Z(p2R, p2I)).im / g2;
-        double uqrI = a.conj().times(new Z(p3R, p3I)).im / g2;
-        Z mr = b.conj().times(new Z(xkrR, xkrI)).plus(a.conj().times(new Z(xklrR, xklrI)));
+        // u conj(L) = j g (1 - conj(L)): sum u conj(L)^2 k r = j g (KLR - P2), sum x conj(L) k r = j g (KR - KLR) + x0 KLR.
+        Z klr = new Z(klrR, klrI);
+        Z p3 = new Z(-g * (klrI - p2I), g * (klrR - p2R));
+        Z xklr = new Z(-g * (krI - klrI), g * (krR - klrR)).plus(klr.times(x0));
+        double uqrI = a.conj().times(p3).im / g2;
+        Z mr = b.conj().times(new Z(xkrR, xkrI)).plus(a.conj().times(xklr));
         jtr[0] = krR;
         jtr[1] = krI;
         jtr[2] = klrR;

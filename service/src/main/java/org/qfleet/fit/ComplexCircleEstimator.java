@@ -113,7 +113,7 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
         double[] start = coarse(new CircleProblem(xs, rs, is, false, false, uniform), new double[] {a[2], a[3], x0, g, t}, stride);
         LevenbergMarquardt.Solution s5 = LevenbergMarquardt.solve(plain, start);
         double[] p5 = s5.p();
-        if (backgroundScore(plain, s5.gradientAt()) > BACKGROUND_SIGNIFICANCE * s5.cost() / Math.max(1, 2 * n - 7)) {
+        if (backgroundScore(plain, s5.evaluatedAt()) > BACKGROUND_SIGNIFICANCE * s5.cost() / Math.max(1, 2 * n - 7)) {
             CircleProblem withBackground = new CircleProblem(x, re, im, true, false, uniform);
             double[] p7 = {0, 0, p5[0], p5[1], p5[2], p5[3], p5[4]};
             LevenbergMarquardt.Solution s7 = LevenbergMarquardt.solve(withBackground, p7);
@@ -171,9 +171,9 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
 
     /**
      * The cost reduction a background would bring to the background-free solution: the drop one
-     * Gauss-Newton step of the model with a background would make from the point where the plain
-     * fit was linearized, less the drop the plain model's own step makes from there (nothing at its
-     * minimum): the score test of the background, from the same pass over the data.
+     * Gauss-Newton step of the model with a background would make from the plain fit's last pass,
+     * less the drop the plain model's own step makes from there (next to nothing at its minimum):
+     * the score test of the background, from the same pass over the data.
      */
     private static double backgroundScore(CircleProblem plain, double[] p5) {
         double[][] jtj = new double[7][7];

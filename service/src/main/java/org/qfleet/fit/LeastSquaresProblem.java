@@ -19,12 +19,4 @@ interface LeastSquaresProblem {
      * at {@code p}, and returns the cost there.
      */
     double normalEquations(double[] p, double[][] jtj, double[] jtr);
-
-    /**
-     * Fills the upper triangle of {@code jtj} at {@code p} and returns the cost there, without J^T r:
-     * cheaper than {@link #normalEquations} for a model whose J^T J does not involve the residuals.
-     */
-    default double costAndCurvature(double[] p, double[][] jtj) {
-        return normalEquations(p, jtj, new double[parameterCount()]);
-    }
 }

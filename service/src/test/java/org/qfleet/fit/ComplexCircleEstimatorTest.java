@@ -79,9 +79,8 @@ class ComplexCircleEstimatorTest {
         double residualScale = optimum.getCost() / Math.sqrt(2 * N - mine.length);
         double[] sigma = optimum.getSigma(1e-14).mapMultiply(residualScale).toArray();
         for (int k = 0; k < mine.length; k++) {
-            // The same minimum: parameters agree to a small fraction of their own uncertainty (our
-            // solver stops once its quadratic model puts the minimum within a tenth of one) ...
-            assertThat(mine[k]).isCloseTo(theirs[k], within(2e-2 * sigma[k]));
+            // The same minimum: parameters agree to a small fraction of their own uncertainty ...
+            assertThat(mine[k]).isCloseTo(theirs[k], within(1e-3 * sigma[k]));
             // ... and so do the uncertainties.
             assertThat(Math.sqrt(ours.covariance()[k][k])).isCloseTo(sigma[k], within(1e-3 * sigma[k]));
         }
