@@ -192,18 +192,16 @@ final class CircleProblem implements LeastSquaresProblem {
         double ai = p[1];
         double x0 = p[2];
         double g = p[3];
-        PassScratch scratch = PassScratch.of(x.length);
-        double[] cos = scratch.cos();
-        double[] sin = scratch.sin();
-        Phasors.fill(p[4], x, equallySpaced, cos, sin);
+        PhasorWalk phasor = PhasorWalk.of(p[4], x, equallySpaced);
         double[] power = power();
         double g2 = g * g;
         double cost = 0;
         double s0 = 0, v1 = 0, t0 = 0, t1 = 0;
         double c0r = 0, c0i = 0, c1r = 0, c1i = 0, c2r = 0, c2i = 0;
         for (int k = 0; k < x.length; k++) {
-            double c = cos[k];
-            double s = sin[k];
+            phasor.stepTo(k);
+            double c = phasor.c;
+            double s = phasor.s;
             double xk = x[k];
             double wr = c * zr[k] + s * zi[k];
             double wi = c * zi[k] - s * zr[k];
@@ -355,11 +353,8 @@ final class CircleProblem implements LeastSquaresProblem {
         double ai = p[3];
         double x0 = p[4];
         double g = p[5];
-        PassScratch scratch = PassScratch.of(x.length);
-        double[] cos = scratch.cos();
-        double[] sin = scratch.sin();
-        double[] gain = scratch.gain();
-        Phasors.fill(p[6], x, equallySpaced, cos, sin);
+        PhasorWalk phasor = PhasorWalk.of(p[6], x, equallySpaced);
+        double[] gain = PassScratch.of(x.length).gain();
         Phasors.fillGain(p[7], x, equallySpaced, gain);
         double[] power = power();
         double g2 = g * g;
@@ -368,8 +363,9 @@ final class CircleProblem implements LeastSquaresProblem {
         double krR = 0, krI = 0, xkrR = 0, xkrI = 0, klrR = 0, klrI = 0;
         double p2R = 0, p2I = 0;
         for (int i = 0; i < x.length; i++) {
-            double c = cos[i];
-            double s = sin[i];
+            phasor.stepTo(i);
+            double c = phasor.c;
+            double s = phasor.s;
             double xk = x[i];
             double wr = c * zr[i] + s * zi[i];
             double wi = c * zi[i] - s * zr[i];

@@ -113,6 +113,17 @@ class CircleProblemTest {
     }
 
     @Test
+    void unevenlySpacedPoints() {
+        // Phasors from sines and cosines per point instead of turning one step at a time.
+        for (int i = 1; i < N - 1; i++) {
+            x[i] += 0.3 * (2.0 / (N - 1)) * Math.sin(1.7 * i);
+        }
+        assertThat(Phasors.equallySpaced(x)).isFalse();
+        check(false, false, new double[] {0, 0, 0.3, -0.2, 0.05, 0.08, 1.7, 0});
+        check(true, true, new double[] {0.4, -0.7, 0.3, -0.2, 0.05, 0.08, 1.7, 0.2});
+    }
+
+    @Test
     void backgroundScoreMatchesTheBackgroundModelAtZeroBackground() {
         double[] p5 = {0.3, -0.2, 0.05, 0.08, 1.7};
         double[][] jtj5 = new double[5][5];
