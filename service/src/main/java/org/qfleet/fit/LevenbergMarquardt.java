@@ -50,6 +50,7 @@ final class LevenbergMarquardt {
         double[] trialJtr = new double[n];
         double[][] damped = new double[n][n];
         double[] step = new double[n];
+        double[] gaussNewton = new double[n];
         double[] trial = new double[n];
         double cost = problem.normalEquations(p, jtj, jtr);
         double lambda = 1e-3;
@@ -57,21 +58,25 @@ final class LevenbergMarquardt {
         boolean converged = false;
         while (iteration < MAX_ITERATIONS && !converged) {
             iteration++;
-            // The quadratic model's own minimum, undamped: when it lies within the tolerance, so does the
-            // true one (damping alone could shrink a step along a poorly determined direction to nothing).
-            if (solveDamped(jtj, jtr, 0, damped, step) && drop(step, jtr) <= lastStepFraction * cost / dof) {
-                for (int i = 0; i < n; i++) {
-                    trial[i] = p[i] + step[i];
-                }
-                Linear.mirrorUpper(jtj);
-                return new Solution(trial, cost, jtj, p, iteration, true);
-            }
             if (!solveDamped(jtj, jtr, lambda, damped, step)) {
                 lambda *= 10;
                 if (lambda > MAX_LAMBDA) {
                     break;
                 }
                 continue;
+            }
+            double tolerance = lastStepFraction * cost / dof;
+            // Near the end, the quadratic model's own minimum, undamped: when it lies within the
+            // tolerance, so does the true one. (Damping only shortens a step, so a damped step that
+            // promises more leaves nothing to check; one that promises less may merely have been
+            // shrunk to nothing along a poorly determined direction.)
+            if (drop(step, jtr) <= tolerance && solveDamped(jtj, jtr, 0, damped, gaussNewton)
+                    && drop(gaussNewton, jtr) <= tolerance) {
+                for (int i = 0; i < n; i++) {
+                    trial[i] = p[i] + gaussNewton[i];
+                }
+                Linear.mirrorUpper(jtj);
+                return new Solution(trial, cost, jtj, p, iteration, true);
             }
             for (int i = 0; i < n; i++) {
                 trial[i] = p[i] + step[i];
