@@ -48,7 +48,7 @@ final class SweepPublisher implements AutoCloseable {
 
     /**
      * @param kafka Kafka client settings, with {@code bootstrap.servers}; they win over the
-     *              publisher's defaults (idempotent, acks=all, lz4)
+     *              publisher's defaults (idempotent, acks=all, lz4, one request in flight)
      */
     SweepPublisher(Map<String, Object> kafka, String topic, Messages messages) {
         Map<String, Object> config = new java.util.HashMap<>();
@@ -57,6 +57,12 @@ final class SweepPublisher implements AutoCloseable {
         config.put(ProducerConfig.LINGER_MS_CONFIG, "5");
         config.put(ProducerConfig.COMPRESSION_TYPE_CONFIG, "lz4");
         config.put(ProducerConfig.MAX_BLOCK_MS_CONFIG, "30000");
+        // One request in flight per broker: right after its topics were created, a broker can refuse
+        // the first request (NOT_LEADER_OR_FOLLOWER) and accept the next, after which the idempotent
+        // producer retries the first with OUT_OF_ORDER_SEQUENCE_NUMBER until it times out and the
+        // sweeps are lost (Apache Kafka issue KAFKA-15591, seen here even after every new partition
+        // reported a leader). With one request at a time the refused one is simply retried.
+        config.put(ProducerConfig.MAX_IN_FLIGHT_REQUESTS_PER_CONNECTION, "1");
         config.putAll(kafka);
         this.producer = new KafkaProducer<>(config, new ByteArraySerializer(), new ByteArraySerializer());
         this.topic = topic;
