@@ -76,7 +76,7 @@ final class BenchCommand implements Callable<Integer> {
             description = "Sweeps for the raw and saturation phases (default: ${DEFAULT-VALUE}).")
     long sweeps;
 
-    @Option(names = "--warm-up", paramLabel = "N", defaultValue = "10000",
+    @Option(names = "--warm-up", paramLabel = "N", defaultValue = "30000",
             description = "Sweeps published, read and worked through once, unmeasured, before the measured phases, "
                     + "so that the JIT has compiled the clients, the broker and the service; 0 for none (default: ${DEFAULT-VALUE}).")
     long warmUp;
