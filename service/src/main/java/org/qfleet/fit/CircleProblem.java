@@ -88,9 +88,7 @@ final class CircleProblem implements LeastSquaresProblem {
     }
 
     private double costOnly(double[] p) {
-        double cost = residuals(p, power());
-        lastPowerAt = p.clone();
-        return cost;
+        return residuals(p, null);
     }
 
     /**
@@ -128,19 +126,17 @@ final class CircleProblem implements LeastSquaresProblem {
         double x0 = p[o + 2];
         double g = p[o + 3];
         double slope = tilt ? p[o + 5] : 0;
-        PassScratch scratch = PassScratch.of(x.length);
-        double[] cos = scratch.cos();
-        double[] sin = scratch.sin();
-        double[] gain = scratch.gain();
-        Phasors.fill(p[o + 4], x, equallySpaced, cos, sin);
+        PhasorWalk phasor = PhasorWalk.of(p[o + 4], x, equallySpaced);
+        double[] gain = PassScratch.gain(x.length);
         if (tilt) {
             Phasors.fillGain(slope, x, equallySpaced, gain);
         }
         double g2 = g * g;
         double cost = 0;
         for (int k = 0; k < x.length; k++) {
-            double wr = cos[k] * zr[k] + sin[k] * zi[k];
-            double wi = cos[k] * zi[k] - sin[k] * zr[k];
+            phasor.stepTo(k);
+            double wr = phasor.c * zr[k] + phasor.s * zi[k];
+            double wi = phasor.c * zi[k] - phasor.s * zr[k];
             double u = x[k] - x0;
             double dd = 1 / (g2 + u * u);
             double lr = g2 * dd;
@@ -243,8 +239,32 @@ final class CircleProblem implements LeastSquaresProblem {
         double t2 = s0 - g2 * t0;                       // sum u^2 / |D|^4
         double w3 = v1 - g2 * t1;                       // sum u^3 / |D|^4
         double u1 = v1 + x0 * s0;                       // sum x / |D|^2
+        double u2 = t1 + x0 * t0;                       // sum x / |D|^4
+        double u3 = t2 + x0 * t1;                       // sum x u / |D|^4
+        double u4 = uu1 + 2 * x0 * v1 + x0 * x0 * s0;   // sum x^2 / |D|^2
         double u5 = uu1 + x0 * v1;                      // sum x u / |D|^2
-        double[] e = plainCurvature(p, s0, v1, t0, t1);
+        double a2 = ar * ar + ai * ai;
+        // K1 = sum (g - j u) / |D|^4, Kg = sum u (g - j u) / |D|^4.
+        double k1r = g * t0;
+        double k1i = -t1;
+        double kgr = g * t1;
+        double kgi = -t2;
+        double[] e = new double[15];
+        e[0] = g2 * s0;                                   // ar ar
+        e[1] = 0;                                         // ar ai
+        e[2] = -g2 * (ar * k1i + ai * k1r);               // ar x0: Re(j g^2 A K1)
+        e[3] = -g * (ar * kgi + ai * kgr);                // ar g:  Re(j g A Kg)
+        e[4] = g2 * u1 * ai;                              // ar t
+        e[5] = g2 * s0;                                   // ai ai
+        e[6] = g2 * (ar * k1r - ai * k1i);                // ai x0: Re(g^2 A K1)
+        e[7] = g * (ar * kgr - ai * kgi);                 // ai g:  Re(g A Kg)
+        e[8] = -g2 * u1 * ar;                             // ai t
+        e[9] = g2 * a2 * t0;                              // x0 x0
+        e[10] = g * a2 * t1;                              // x0 g
+        e[11] = -g2 * g * a2 * u2;                        // x0 t
+        e[12] = a2 * t2;                                  // g g
+        e[13] = -g2 * a2 * u3;                            // g t
+        e[14] = a2 * g2 * u4;                             // t t
         double[] v = {
             c1r,
             c1i,
@@ -283,49 +303,6 @@ final class CircleProblem implements LeastSquaresProblem {
         return cost;
     }
 
-    /**
-     * J^T J of the background-free model, upper triangle by rows, from the sums S0 = sum 1/|D|^2,
-     * V1 = sum u/|D|^2, T0 = sum 1/|D|^4 and T1 = sum u/|D|^4 (the others follow from these four,
-     * with u^2 / |D|^2 = 1 - g^2 / |D|^2 and x = u + x0).
-     */
-    private double[] plainCurvature(double[] p, double s0, double v1, double t0, double t1) {
-        double ar = p[0];
-        double ai = p[1];
-        double x0 = p[2];
-        double g = p[3];
-        double g2 = g * g;
-        int n = x.length;
-        double uu1 = n - g2 * s0;                       // sum u^2 / |D|^2
-        double t2 = s0 - g2 * t0;                       // sum u^2 / |D|^4
-        double u1 = v1 + x0 * s0;                       // sum x / |D|^2
-        double u2 = t1 + x0 * t0;                       // sum x / |D|^4
-        double u3 = t2 + x0 * t1;                       // sum x u / |D|^4
-        double u4 = uu1 + 2 * x0 * v1 + x0 * x0 * s0;   // sum x^2 / |D|^2
-        double a2 = ar * ar + ai * ai;
-        // K1 = sum (g - j u) / |D|^4, Kg = sum u (g - j u) / |D|^4.
-        double k1r = g * t0;
-        double k1i = -t1;
-        double kgr = g * t1;
-        double kgi = -t2;
-        double[] e = new double[15];
-        e[0] = g2 * s0;                                   // ar ar
-        e[1] = 0;                                         // ar ai
-        e[2] = -g2 * (ar * k1i + ai * k1r);               // ar x0: Re(j g^2 A K1)
-        e[3] = -g * (ar * kgi + ai * kgr);                // ar g:  Re(j g A Kg)
-        e[4] = g2 * u1 * ai;                              // ar t
-        e[5] = g2 * s0;                                   // ai ai
-        e[6] = g2 * (ar * k1r - ai * k1i);                // ai x0: Re(g^2 A K1)
-        e[7] = g * (ar * kgr - ai * kgi);                 // ai g:  Re(g A Kg)
-        e[8] = -g2 * u1 * ar;                             // ai t
-        e[9] = g2 * a2 * t0;                              // x0 x0
-        e[10] = g * a2 * t1;                              // x0 g
-        e[11] = -g2 * g * a2 * u2;                        // x0 t
-        e[12] = a2 * t2;                                  // g g
-        e[13] = -g2 * a2 * u3;                            // g t
-        e[14] = a2 * g2 * u4;                             // t t
-        return e;
-    }
-
     /** Copies the 5 x 5 upper triangle given by rows into {@code m}, starting at row and column {@code offset}. */
     private static void placeUpper5x5(double[] upper, double[][] m, int offset) {
         int k = 5;
@@ -354,7 +331,7 @@ final class CircleProblem implements LeastSquaresProblem {
         double x0 = p[4];
         double g = p[5];
         PhasorWalk phasor = PhasorWalk.of(p[6], x, equallySpaced);
-        double[] gain = PassScratch.of(x.length).gain();
+        double[] gain = PassScratch.gain(x.length);
         Phasors.fillGain(p[7], x, equallySpaced, gain);
         double[] power = power();
         double g2 = g * g;
@@ -406,46 +383,8 @@ final class CircleProblem implements LeastSquaresProblem {
             p2I += lr * lI - li * lR;
         }
         lastPowerAt = p.clone();
-        tiltCurvature(p, new double[] {s00, s10, s20, s01, s11, s02, s12}, jtj);
-        // The residual's projections.
-        Z b = new Z(p[0], p[1]);
-        Z a = new Z(p[2], p[3]);
-        // P2 (and so P3) summed times g^2.
-        double qrI = a.conj().times(new Z(p2R, p2I)).im / g2;
-        // u conj(L) = j g (1 - conj(L)): sum u conj(L)^2 k r = j g (KLR - P2), sum x conj(L) k r = j g (KR - KLR) + x0 KLR.
-        Z klr = new Z(klrR, klrI);
-        Z p3 = new Z(-g * (klrI - p2I), g * (klrR - p2R));
-        Z xklr = new Z(-g * (krI - klrI), g * (krR - klrR)).plus(klr.times(x0));
-        double uqrI = a.conj().times(p3).im / g2;
-        Z mr = b.conj().times(new Z(xkrR, xkrI)).plus(a.conj().times(xklr));
-        jtr[0] = krR;
-        jtr[1] = krI;
-        jtr[2] = klrR;
-        jtr[3] = klrI;
-        jtr[4] = g * qrI;
-        jtr[5] = uqrI;
-        jtr[6] = -mr.im;
-        jtr[7] = mr.re;
-        return cost;
-    }
-
-    /**
-     * J^T J of the model with background and tilt (see {@link #tiltKernel}), upper triangle, from the
-     * seven geometric sums S00, S10, S20, S01, S11, S02, S12.
-     */
-    private static void tiltCurvature(double[] p, double[] sums, double[][] jtj) {
-        Z b = new Z(p[0], p[1]);
-        Z a = new Z(p[2], p[3]);
-        double x0 = p[4];
-        double g = p[5];
-        double g2 = g * g;
-        double s00 = sums[0];
-        double s10 = sums[1];
-        double s20 = sums[2];
-        double s01 = sums[3];
-        double s11 = sums[4];
-        double s02 = sums[5];
-        double s12 = sums[6];
+        Z b = new Z(br, bi);
+        Z a = new Z(ar, ai);
         double a2 = a.re * a.re + a.im * a.im;
         // S[a][b] with more powers of u, from u^2 / |D|^2 = 1 - g^2 / |D|^2
         double s21 = s00 - g2 * s01;
@@ -525,6 +464,24 @@ final class CircleProblem implements LeastSquaresProblem {
         jtj[6][6] = mm;
         jtj[6][7] = 0;
         jtj[7][7] = mm;
+        // The residual's projections.
+        // P2 (and so P3) summed times g^2.
+        double qrI = a.conj().times(new Z(p2R, p2I)).im / g2;
+        // u conj(L) = j g (1 - conj(L)): sum u conj(L)^2 k r = j g (KLR - P2), sum x conj(L) k r = j g (KR - KLR) + x0 KLR.
+        Z klr = new Z(klrR, klrI);
+        Z p3 = new Z(-g * (klrI - p2I), g * (klrR - p2R));
+        Z xklr = new Z(-g * (krI - klrI), g * (krR - klrR)).plus(klr.times(x0));
+        double uqrI = a.conj().times(p3).im / g2;
+        Z mr = b.conj().times(new Z(xkrR, xkrI)).plus(a.conj().times(xklr));
+        jtr[0] = krR;
+        jtr[1] = krI;
+        jtr[2] = klrR;
+        jtr[3] = klrI;
+        jtr[4] = g * qrI;
+        jtr[5] = uqrI;
+        jtr[6] = -mr.im;
+        jtr[7] = mr.re;
+        return cost;
     }
 
     /** A complex number for the few products after a pass. */

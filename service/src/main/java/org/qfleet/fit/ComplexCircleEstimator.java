@@ -170,29 +170,14 @@ final class ComplexCircleEstimator implements ResonanceEstimator {
     }
 
     /**
-     * The cost reduction a background would bring to the background-free solution: the drop one
-     * Gauss-Newton step of the model with a background would make from the plain fit's last pass,
-     * less the drop the plain model's own step makes from there (next to nothing at its minimum):
-     * the score test of the background, from the same pass over the data.
+     * The cost reduction one Gauss-Newton step of the model with a background would bring from the
+     * background-free solution: the score test of the background, from the same pass over the data.
      */
     private static double backgroundScore(CircleProblem plain, double[] p5) {
-        double[][] jtj = new double[7][7];
-        double[] jtr = new double[7];
+        int k = 7;
+        double[][] jtj = new double[k][k];
+        double[] jtr = new double[k];
         plain.backgroundScoreEquations(p5, jtj, jtr);
-        double[][] jtj5 = new double[5][5];
-        double[] jtr5 = new double[5];
-        for (int i = 0; i < 5; i++) {
-            System.arraycopy(jtj[i + 2], 2, jtj5[i], 0, 5);
-            jtr5[i] = jtr[i + 2];
-        }
-        double withBackground = gaussNewtonDrop(jtj, jtr);
-        double plainDrop = gaussNewtonDrop(jtj5, jtr5);
-        return Double.isFinite(plainDrop) ? withBackground - plainDrop : Double.POSITIVE_INFINITY;
-    }
-
-    /** The drop in cost J^T r . (J^T J)^-1 J^T r that a Gauss-Newton step predicts (upper triangles used). */
-    private static double gaussNewtonDrop(double[][] jtj, double[] jtr) {
-        int k = jtr.length;
         for (int i = 0; i < k; i++) {
             // A whisper of damping keeps the near-degenerate directions (background against delay) solvable.
             jtj[i][i] *= 1 + 1e-9;

@@ -169,20 +169,19 @@ final class DelaySearch {
         }
 
         private void projectByPhasors(double t) {
-            int n = x.length;
             double sumR = 0;
             double sumI = 0;
             double lSumR = 0;
             double lSumI = 0;
-            PassScratch scratch = PassScratch.of(n);
-            double[] cos = scratch.cos();
-            double[] sin = scratch.sin();
-            Phasors.fill(t, x, uniform, cos, sin);
-            for (int i = 0; i < n; i++) {
-                sumR += cos[i] * re[i] + sin[i] * im[i];
-                sumI += cos[i] * im[i] - sin[i] * re[i];
-                lSumR += cos[i] * cr[i] + sin[i] * ci[i];
-                lSumI += cos[i] * ci[i] - sin[i] * cr[i];
+            PhasorWalk phasor = PhasorWalk.of(t, x, uniform);
+            for (int i = 0; i < x.length; i++) {
+                phasor.stepTo(i);
+                double c = phasor.c;
+                double s = phasor.s;
+                sumR += c * re[i] + s * im[i];
+                sumI += c * im[i] - s * re[i];
+                lSumR += c * cr[i] + s * ci[i];
+                lSumI += c * ci[i] - s * cr[i];
             }
             y0r = sumR;
             y0i = sumI;
@@ -193,81 +192,76 @@ final class DelaySearch {
         /**
          * On equally spaced points, x_i = x_0 + i h, a sum of exp(j t x_i) a_i is exp(j t x_0) times the
          * polynomial sum a_i q^i in q = exp(j t h), evaluated by Horner's rule: one complex multiply-add
-         * per point and no phasors at all. Four interleaved chains in q^4 (points i = 4m + r) keep the
-         * multiplications independent; |q| = 1 keeps the rule stable.
+         * per point and no phasors at all.
          */
         private void projectByHorner(double t) {
             int n = x.length;
             double h = (x[n - 1] - x[0]) / (n - 1);
-            double qc = Math.cos(t * h);
-            double qs = Math.sin(t * h);
-            double q2c = qc * qc - qs * qs;
-            double q2s = 2 * qc * qs;
-            double bc = q2c * q2c - q2s * q2s;
-            double bs = 2 * q2c * q2s;
-            // chains r = 0..3 of Y0 (z) and Y1 (c = conj(L) z)
-            double z0r = 0, z0i = 0, z1r = 0, z1i = 0, z2r = 0, z2i = 0, z3r = 0, z3i = 0;
-            double c0r = 0, c0i = 0, c1r = 0, c1i = 0, c2r = 0, c2i = 0, c3r = 0, c3i = 0;
-            int top = n / CHAINS * CHAINS;
-            // the last, partial group of points starts its chains
-            if (top < n) {
-                z0r = re[top];
-                z0i = im[top];
-                c0r = cr[top];
-                c0i = ci[top];
-            }
-            if (top + 1 < n) {
-                z1r = re[top + 1];
-                z1i = im[top + 1];
-                c1r = cr[top + 1];
-                c1i = ci[top + 1];
-            }
-            if (top + 2 < n) {
-                z2r = re[top + 2];
-                z2i = im[top + 2];
-                c2r = cr[top + 2];
-                c2i = ci[top + 2];
-            }
-            for (int k = top - CHAINS; k >= 0; k -= CHAINS) {
-                double v;
-                v = z0r * bc - z0i * bs + re[k];
-                z0i = z0r * bs + z0i * bc + im[k];
-                z0r = v;
-                v = z1r * bc - z1i * bs + re[k + 1];
-                z1i = z1r * bs + z1i * bc + im[k + 1];
-                z1r = v;
-                v = z2r * bc - z2i * bs + re[k + 2];
-                z2i = z2r * bs + z2i * bc + im[k + 2];
-                z2r = v;
-                v = z3r * bc - z3i * bs + re[k + 3];
-                z3i = z3r * bs + z3i * bc + im[k + 3];
-                z3r = v;
-                v = c0r * bc - c0i * bs + cr[k];
-                c0i = c0r * bs + c0i * bc + ci[k];
-                c0r = v;
-                v = c1r * bc - c1i * bs + cr[k + 1];
-                c1i = c1r * bs + c1i * bc + ci[k + 1];
-                c1r = v;
-                v = c2r * bc - c2i * bs + cr[k + 2];
-                c2i = c2r * bs + c2i * bc + ci[k + 2];
-                c2r = v;
-                v = c3r * bc - c3i * bs + cr[k + 3];
-                c3i = c3r * bs + c3i * bc + ci[k + 3];
-                c3r = v;
-            }
-            // sum over r of q^r times chain r, then times exp(j t x_0)
-            double q3c = q2c * qc - q2s * qs;
-            double q3s = q2c * qs + q2s * qc;
-            double sz = z0r + (qc * z1r - qs * z1i) + (q2c * z2r - q2s * z2i) + (q3c * z3r - q3s * z3i);
-            double szi = z0i + (qc * z1i + qs * z1r) + (q2c * z2i + q2s * z2r) + (q3c * z3i + q3s * z3r);
-            double sc = c0r + (qc * c1r - qs * c1i) + (q2c * c2r - q2s * c2i) + (q3c * c3r - q3s * c3i);
-            double sci = c0i + (qc * c1i + qs * c1r) + (q2c * c2i + q2s * c2r) + (q3c * c3i + q3s * c3r);
+            Powers q = new Powers(Math.cos(t * h), Math.sin(t * h));
+            double[] sum = new double[2];
             double ec = Math.cos(t * x[0]);
             double es = Math.sin(t * x[0]);
-            y0r = ec * sz - es * szi;
-            y0i = ec * szi + es * sz;
-            y1r = ec * sc - es * sci;
-            y1i = ec * sci + es * sc;
+            polynomial(re, im, q, sum);
+            y0r = ec * sum[0] - es * sum[1];
+            y0i = ec * sum[1] + es * sum[0];
+            polynomial(cr, ci, q, sum);
+            y1r = ec * sum[0] - es * sum[1];
+            y1i = ec * sum[1] + es * sum[0];
         }
+    }
+
+    /** q, q^2, q^3 and q^4 of a complex q. */
+    private record Powers(double c1, double s1, double c2, double s2, double c3, double s3, double c4, double s4) {
+
+        Powers(double c, double s) {
+            this(c, s, c * c - s * s, 2 * c * s);
+        }
+
+        private Powers(double c, double s, double c2, double s2) {
+            this(c, s, c2, s2, c2 * c - s2 * s, c2 * s + s2 * c, c2 * c2 - s2 * s2, 2 * c2 * s2);
+        }
+    }
+
+    /**
+     * sum (ar_i + j ai_i) q^i into {re, im} of {@code sum}, by Horner's rule in four interleaved chains
+     * in q^4 (points i = 4m + r), which keeps the multiplications independent; |q| = 1 keeps the rule
+     * stable.
+     */
+    private static void polynomial(double[] ar, double[] ai, Powers q, double[] sum) {
+        int n = ar.length;
+        double bc = q.c4();
+        double bs = q.s4();
+        double a0r = 0, a0i = 0, a1r = 0, a1i = 0, a2r = 0, a2i = 0, a3r = 0, a3i = 0;
+        int top = n / CHAINS * CHAINS;
+        // the last, partial group of points starts its chains
+        if (top < n) {
+            a0r = ar[top];
+            a0i = ai[top];
+        }
+        if (top + 1 < n) {
+            a1r = ar[top + 1];
+            a1i = ai[top + 1];
+        }
+        if (top + 2 < n) {
+            a2r = ar[top + 2];
+            a2i = ai[top + 2];
+        }
+        for (int k = top - CHAINS; k >= 0; k -= CHAINS) {
+            double v = a0r * bc - a0i * bs + ar[k];
+            a0i = a0r * bs + a0i * bc + ai[k];
+            a0r = v;
+            v = a1r * bc - a1i * bs + ar[k + 1];
+            a1i = a1r * bs + a1i * bc + ai[k + 1];
+            a1r = v;
+            v = a2r * bc - a2i * bs + ar[k + 2];
+            a2i = a2r * bs + a2i * bc + ai[k + 2];
+            a2r = v;
+            v = a3r * bc - a3i * bs + ar[k + 3];
+            a3i = a3r * bs + a3i * bc + ai[k + 3];
+            a3r = v;
+        }
+        // the sum over r of q^r times chain r
+        sum[0] = a0r + (q.c1() * a1r - q.s1() * a1i) + (q.c2() * a2r - q.s2() * a2i) + (q.c3() * a3r - q.s3() * a3i);
+        sum[1] = a0i + (q.c1() * a1i + q.s1() * a1r) + (q.c2() * a2i + q.s2() * a2r) + (q.c3() * a3i + q.s3() * a3r);
     }
 }

@@ -1,42 +1,25 @@
 package org.qfleet.fit;
 
 /**
- * The phasor and gain arrays of the passes over the data, one set per thread, reused from pass to
- * pass and fit to fit. Each pass fills them and reads them before it returns and nothing keeps them
- * across passes, so every problem and search on a thread can share one set: a fit then allocates
- * none of them (they were a third of its allocation, and zeroing fresh memory is not free).
+ * The gain array of the passes over the data with a magnitude tilt, one per thread, reused from
+ * pass to pass and fit to fit. A pass fills it and reads it before it returns and nothing keeps it
+ * across passes, so every problem on a thread can share it and a fit allocates none.
  */
 final class PassScratch {
 
     private static final ThreadLocal<PassScratch> PER_THREAD = ThreadLocal.withInitial(PassScratch::new);
 
-    private double[] cos = new double[0];
-    private double[] sin = new double[0];
     private double[] gain = new double[0];
 
     private PassScratch() {
     }
 
-    /** This thread's arrays, each at least {@code n} long (only the first n entries are meaningful). */
-    static PassScratch of(int n) {
+    /** This thread's gain array, at least {@code n} long (only the first n entries are meaningful). */
+    static double[] gain(int n) {
         PassScratch scratch = PER_THREAD.get();
-        if (scratch.cos.length < n) {
-            scratch.cos = new double[n];
-            scratch.sin = new double[n];
+        if (scratch.gain.length < n) {
             scratch.gain = new double[n];
         }
-        return scratch;
-    }
-
-    double[] cos() {
-        return cos;
-    }
-
-    double[] sin() {
-        return sin;
-    }
-
-    double[] gain() {
-        return gain;
+        return scratch.gain;
     }
 }

@@ -171,14 +171,12 @@ final class StartingPoint {
     /** The trace with the delay t taken out, as {re, im}. */
     static double[][] rotated(double[] x, double[] re, double[] im, double t, boolean equallySpaced) {
         int n = x.length;
-        PassScratch scratch = PassScratch.of(n);
-        double[] cos = scratch.cos();
-        double[] sin = scratch.sin();
-        Phasors.fill(t, x, equallySpaced, cos, sin);
+        PhasorWalk phasor = PhasorWalk.of(t, x, equallySpaced);
         double[][] out = new double[2][n];
         for (int i = 0; i < n; i++) {
-            out[0][i] = cos[i] * re[i] + sin[i] * im[i];
-            out[1][i] = cos[i] * im[i] - sin[i] * re[i];
+            phasor.stepTo(i);
+            out[0][i] = phasor.c * re[i] + phasor.s * im[i];
+            out[1][i] = phasor.c * im[i] - phasor.s * re[i];
         }
         return out;
     }

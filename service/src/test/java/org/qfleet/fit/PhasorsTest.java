@@ -5,7 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import org.junit.jupiter.api.Test;
 
-/** The rotated phasors and gains against the library functions at every point. */
+/** The turned phasors and the gains against the library functions at every point. */
 class PhasorsTest {
 
     private static double[] grid(int n) {
@@ -21,12 +21,11 @@ class PhasorsTest {
         for (int n : new int[] {1, 2, 3, 4, 5, 6, 7, 101, 401, 1601, 20001}) {
             double[] x = grid(n);
             for (double t : new double[] {0, 0.3, -2.5, 40, 900}) {
-                double[] cos = new double[n];
-                double[] sin = new double[n];
-                Phasors.fill(t, x, Phasors.equallySpaced(x), cos, sin);
+                PhasorWalk phasor = PhasorWalk.of(t, x, Phasors.equallySpaced(x));
                 for (int i = 0; i < n; i++) {
-                    assertThat(cos[i]).as("cos n=%d t=%s i=%d", n, t, i).isCloseTo(Math.cos(t * x[i]), within(1e-11));
-                    assertThat(sin[i]).as("sin n=%d t=%s i=%d", n, t, i).isCloseTo(-Math.sin(t * x[i]), within(1e-11));
+                    phasor.stepTo(i);
+                    assertThat(phasor.c).as("cos n=%d t=%s i=%d", n, t, i).isCloseTo(Math.cos(t * x[i]), within(1e-11));
+                    assertThat(phasor.s).as("sin n=%d t=%s i=%d", n, t, i).isCloseTo(-Math.sin(t * x[i]), within(1e-11));
                 }
             }
         }
